@@ -1,0 +1,38 @@
+// A calculation step is a plain record: what it is, its symbol, formula,
+// the formula with values substituted, the result and its source. Quantities
+// stay in SI with their dimension; the report prints them in the user's units.
+import type { Dim } from '../units/units.ts';
+
+export interface Qty {
+  readonly si: number;
+  readonly dim: Dim;
+}
+
+export const qty = (si: number, dim: Dim): Qty => ({ si, dim });
+
+/** A formula with values: text pieces and quantities, printed in order. */
+export type Expr = ReadonlyArray<string | Qty>;
+
+export type StepStatus = 'info' | 'ok' | 'fail' | 'warn';
+
+export interface CalcStep {
+  readonly description: string;
+  readonly symbol: string;
+  readonly formula: string;
+  readonly substituted: Expr;
+  readonly result: Qty;
+  readonly source: string;
+  readonly status: StepStatus;
+}
+
+/** An explicit collector passed to the code that makes steps (never a global registry). */
+export class StepCollector {
+  private readonly list: CalcStep[] = [];
+  add(step: Omit<CalcStep, 'status'> & { status?: StepStatus }): Qty {
+    this.list.push({ status: 'info', ...step });
+    return step.result;
+  }
+  get steps(): readonly CalcStep[] {
+    return this.list;
+  }
+}

@@ -1,0 +1,224 @@
+// The normalised design: validated input in internal SI units (m, N, Pa, kg, rad).
+// Produced by src/input, read by src/model, src/loads, src/checks and src/report.
+import type { Dim, UnitSystem } from '../units/units.ts';
+
+export type StructureKind = 'cantilever-sign' | 'luminaire-pole' | 'signal-support';
+
+/** Tapered tube. Diameters are outside; for a multisided tube, across the flats. */
+export interface TubeSection {
+  readonly shape: 'round' | 'multisided';
+  /** Number of flat sides (8, 12, 16) for multisided; null for round. */
+  readonly sides: number | null;
+  /** Outside diameter at the member's root end (pole base, arm root). */
+  readonly rootDiameter_m: number;
+  /** Outside diameter at the member's tip end (pole top, arm tip). */
+  readonly tipDiameter_m: number;
+  readonly wall_m: number;
+}
+
+export interface Material {
+  readonly E_Pa: number;
+  readonly G_Pa: number;
+  readonly Fy_Pa: number;
+  readonly density_kgm3: number;
+}
+
+export type BaseFixity = { readonly kind: 'fixed' } | { readonly kind: 'spring'; readonly stiffness_Nm_per_rad: number };
+
+export interface Pole {
+  readonly height_m: number;
+  readonly section: TubeSection;
+  readonly base: BaseFixity;
+}
+
+/**
+ * Global axes: X and Y horizontal, Z up, origin at the pole base centre.
+ * Plan directions are angles from +X toward +Y (counter-clockwise seen from above).
+ */
+export interface Arm {
+  readonly id: string;
+  /** Height above the pole base of the arm axis where it meets the pole. */
+  readonly attachHeight_m: number;
+  readonly direction_rad: number;
+  /** Length along the arm axis from the pole face to the tip. */
+  readonly length_m: number;
+  /** Rise angle above horizontal. */
+  readonly rise_rad: number;
+  readonly section: TubeSection;
+}
+
+/** Where an attachment sits. For an arm: distance along the arm axis from the arm root
+ * (pole face). For the pole: height above the base. */
+export type MemberRef = 'pole' | string;
+
+/** Offset of an attachment's centroid from the member axis.
+ * On an arm: vertical_m up (+) or down (-), lateral_m horizontal and perpendicular to
+ * the arm in plan, positive to the left looking from root to tip (+90 deg in plan).
+ * On the pole: lateral_m horizontal from the pole axis in plan direction direction_rad;
+ * vertical_m is unused (0). */
+export interface Offset {
+  readonly vertical_m: number;
+  readonly lateral_m: number;
+  readonly direction_rad: number;
+}
+
+export interface PanelAttachment {
+  readonly kind: 'panel';
+  readonly id: string;
+  readonly description: string;
+  readonly member: MemberRef;
+  readonly position_m: number;
+  readonly width_m: number;
+  readonly height_m: number;
+  readonly weightPerArea_Pa: number;
+  readonly offset: Offset;
+  /** Plan direction of the panel's face normal. On an arm: perpendicular to the arm. */
+  readonly faceNormal_rad: number;
+}
+
+export interface PointAttachment {
+  readonly kind: 'luminaire' | 'signal-head' | 'other';
+  readonly id: string;
+  readonly description: string;
+  readonly member: MemberRef;
+  readonly position_m: number;
+  readonly weight_N: number;
+  /** Projected (or effective projected) wind area, the same for every wind direction. */
+  readonly windArea_m2: number;
+  readonly offset: Offset;
+}
+
+export type Attachment = PanelAttachment | PointAttachment;
+
+export interface WindDirection {
+  /** Plan direction the wind blows toward. */
+  readonly angle_rad: number;
+  readonly label: string;
+}
+
+export interface WindInput {
+  /** Design pressures entered by the user (already include the coefficients they chose). */
+  readonly membersPressure_Pa: number;
+  readonly panelsPressure_Pa: number;
+  readonly pointsPressure_Pa: number;
+  readonly directions: readonly WindDirection[];
+}
+
+export interface IceInput {
+  /** Ice weight per unit surface area on members and attachments. */
+  readonly weightPerArea_Pa: number;
+  /** Factor on the wind pressures used together with ice. */
+  readonly windFactor: number;
+}
+
+export interface FatigueInput {
+  readonly gallopingPressure_Pa: number | null;
+  readonly naturalGustPressure_Pa: number | null;
+  readonly truckGustPressure_Pa: number | null;
+  readonly importance: { readonly galloping: number; readonly naturalGust: number; readonly truckGust: number };
+  /** Constant-amplitude fatigue threshold of the governing details. */
+  readonly poleBaseThreshold_Pa: number;
+  readonly armRootThreshold_Pa: number;
+}
+
+/** Load kinds that combinations put factors on. 'wind' expands to one analysis per direction. */
+export type LoadKind = 'dead' | 'wind' | 'ice' | 'ice-wind';
+
+export type CombinationCategory = 'strength' | 'extreme-wind' | 'extreme-ice' | 'service' | 'fatigue';
+
+export interface CombinationSpec {
+  readonly id: string;
+  readonly category: CombinationCategory;
+  readonly description: string;
+  readonly factors: Readonly<Partial<Record<LoadKind, number>>>;
+  /** Where the factors come from; defaults say so and ask to be verified. */
+  readonly source: string;
+}
+
+export interface AnchorBolts {
+  readonly count: number;
+  readonly circleDiameter_m: number;
+  readonly boltDiameter_m: number;
+  readonly tensileStrength_Pa: number;
+}
+
+export interface Criteria {
+  /** Arm tip deflection limit as a ratio of arm length (e.g. 1/100 -> 0.01), service. */
+  readonly armTipDeflectionRatio: number;
+  /** Pole top horizontal deflection limit as a ratio of pole height, service. */
+  readonly poleTopDeflectionRatio: number;
+  readonly phi: { readonly flexure: number; readonly shear: number; readonly torsion: number; readonly axial: number; readonly boltTension: number; readonly boltShear: number };
+  readonly anchorBolts: AnchorBolts | null;
+}
+
+export interface AnalysisSettings {
+  readonly segmentsPerMember: number;
+  readonly secondOrder: boolean;
+  readonly pDeltaTolerance: number;
+  readonly pDeltaMaxIterations: number;
+  /** Regular spacing of result stations along members. */
+  readonly stationSpacing_m: number;
+}
+
+export interface Revision {
+  readonly id: string;
+  readonly date: string;
+  readonly description: string;
+}
+
+export interface Project {
+  readonly name: string;
+  readonly structureId: string;
+  readonly location: string;
+  readonly owner: string;
+  readonly revisions: readonly Revision[];
+  readonly preparedBy: string;
+  readonly checkedBy: string;
+  readonly engineerOfRecord: string;
+  /** Date printed on the package (ISO yyyy-mm-dd): from the input or SOURCE_DATE_EPOCH. */
+  readonly date: string;
+}
+
+/** One value the package states as an assumption: every default carries its source. */
+export interface Assumption {
+  /** Input key path, e.g. "material.E". */
+  readonly key: string;
+  readonly label: string;
+  readonly value: number | string | boolean;
+  /** Dimension when value is a number in SI; absent for text. */
+  readonly dim?: Dim;
+  /** Published source, "common practice", or "typical value, verify against the governing code". */
+  readonly source: string;
+  /** True when the user did not give the value and the default was taken. */
+  readonly defaulted: boolean;
+}
+
+export interface Design {
+  readonly formatVersion: 1;
+  /** The user's unit system, for printing. */
+  readonly units: UnitSystem;
+  readonly project: Project;
+  readonly kind: StructureKind;
+  readonly description: string;
+  readonly material: Material;
+  readonly pole: Pole;
+  readonly arms: readonly Arm[];
+  readonly attachments: readonly Attachment[];
+  readonly wind: WindInput;
+  readonly ice: IceInput | null;
+  readonly fatigue: FatigueInput | null;
+  readonly combinations: readonly CombinationSpec[];
+  readonly criteria: Criteria;
+  readonly analysis: AnalysisSettings;
+  readonly assumptions: readonly Assumption[];
+}
+
+/** The design together with where it came from. */
+export interface LoadedDesign {
+  readonly design: Design;
+  readonly file: string;
+  readonly text: string;
+  /** First 12 hex digits of the SHA-256 of the input bytes. */
+  readonly inputHash: string;
+  readonly warnings: readonly import('../errors.ts').Diagnostic[];
+}

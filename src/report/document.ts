@@ -1,0 +1,53 @@
+// The document model: what the package says, in order, as plain data. Built by the
+// section builders in src/report/sections/ from the design and results; turned into
+// a PDF by src/report/pdf/. The renderer computes no engineering; the builders draw nothing.
+import type { CalcStep } from '../calc/step.ts';
+
+export type Block =
+  | { readonly kind: 'heading'; readonly text: string; readonly level: 2 | 3 }
+  | { readonly kind: 'paragraph'; readonly text: string; readonly emphasis?: boolean }
+  | { readonly kind: 'bullets'; readonly items: readonly string[] }
+  | { readonly kind: 'caution'; readonly title: string; readonly text: string }
+  | { readonly kind: 'step'; readonly step: CalcStep }
+  | {
+      readonly kind: 'table';
+      readonly title: string;
+      readonly header: readonly string[];
+      readonly rows: readonly (readonly string[])[];
+      /** Relative column widths; '*' shares what is left. */
+      readonly widths?: readonly (number | '*' | 'auto')[];
+      readonly note?: string;
+    }
+  | { readonly kind: 'figure'; readonly title: string; readonly svg: string; readonly width_pt: number; readonly caption: string }
+  | { readonly kind: 'code'; readonly title: string; readonly text: string }
+  | { readonly kind: 'signoff'; readonly rows: readonly { readonly role: string; readonly name: string }[]; readonly date: string }
+  | { readonly kind: 'pagebreak' };
+
+export interface DocSection {
+  readonly id: string;
+  /** Numbered in the contents ("3 Loads"). */
+  readonly title: string;
+  readonly blocks: readonly Block[];
+}
+
+export interface DocumentMeta {
+  readonly projectName: string;
+  readonly structureId: string;
+  readonly structureKind: string;
+  readonly location: string;
+  readonly owner: string;
+  readonly revision: string;
+  readonly revisionDate: string;
+  readonly status: string; // 'DRAFT FOR REVIEW'
+  readonly date: string; // ISO date printed on the package
+  readonly inputHash: string;
+  readonly inputFile: string;
+  readonly toolVersion: string;
+}
+
+export interface DocumentModel {
+  readonly meta: DocumentMeta;
+  /** Blocks on the cover page below the title block (caution, sign-off). */
+  readonly cover: readonly Block[];
+  readonly sections: readonly DocSection[];
+}
