@@ -1,0 +1,43 @@
+// A small argument reader: positionals, --flag and --key value. Unknown options are errors.
+
+export interface ParsedArgs {
+  readonly positionals: readonly string[];
+  readonly flags: ReadonlySet<string>;
+  readonly values: ReadonlyMap<string, string>;
+}
+
+export interface ArgSpec {
+  /** Options that take no value, without the dashes. */
+  readonly flags: readonly string[];
+  /** Options that take one value. */
+  readonly values: readonly string[];
+}
+
+export class UsageError extends Error {}
+
+export function parseArgs(argv: readonly string[], spec: ArgSpec): ParsedArgs {
+  const positionals: string[] = [];
+  const flags = new Set<string>();
+  const values = new Map<string, string>();
+  for (let k = 0; k < argv.length; k++) {
+    const arg = argv[k]!;
+    if (!arg.startsWith('-') || arg === '-') {
+      positionals.push(arg);
+      continue;
+    }
+    const [name, inline] = arg.replace(/^--?/, '').split(/=(.*)/s, 2) as [string, string | undefined];
+    if (name === 'h') {
+      flags.add('help');
+    } else if (spec.flags.includes(name)) {
+      if (inline !== undefined) throw new UsageError(`option --${name} takes no value`);
+      flags.add(name);
+    } else if (spec.values.includes(name)) {
+      const value = inline ?? argv[++k];
+      if (value === undefined) throw new UsageError(`option --${name} needs a value`);
+      values.set(name, value);
+    } else {
+      throw new UsageError(`unknown option ${arg}`);
+    }
+  }
+  return { positionals, flags, values };
+}

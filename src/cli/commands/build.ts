@@ -1,0 +1,53 @@
+// polebook build <input> [--out DIR] [--json] [--first-order]
+import { basename, extname, join, resolve } from 'node:path';
+import { mkdirSync } from 'node:fs';
+import { EXIT } from '../../errors.ts';
+import { parseArgs, UsageError } from '../args.ts';
+import type { Command } from '../run.ts';
+import { painter } from '../io.ts';
+import { buildPackage } from '../../pipeline.ts';
+import { writeFileAtomic } from '../../output/write-atomic.ts';
+import { printWarnings } from './print-warnings.ts';
+
+const HELP = `Usage: polebook build <input.yaml> [--out DIR] [--json] [--first-order]
+
+Reads the input file, analyses the structure and writes the calculation package
+<out>/<input name>.pdf (and <out>/<input name>.results.json with --json).
+
+Options:
+  --out DIR       folder for the outputs (default: output)
+  --json          also write the analysis results and the model as JSON
+  --first-order   analyse without second-order (P-delta) effects
+  --help          show this help
+
+Nothing is written unless the whole run succeeds; an earlier package is left untouched.
+`;
+
+export const buildCommand: Command = {
+  name: 'build',
+  summary: 'analyse an input file and write its calculation package (PDF, optional JSON)',
+  help: HELP,
+  async run(argv, io) {
+    const args = parseArgs(argv, { flags: ['json', 'first-order'], values: ['out'] });
+    if (args.positionals.length !== 1) throw new UsageError('build takes exactly one input file');
+    const input = resolve(io.cwd, args.positionals[0]!);
+    const outDir = resolve(io.cwd, args.values.get('out') ?? 'output');
+    const result = await buildPackage(input, { env: io.env, firstOrder: args.flags.has('first-order'), json: args.flags.has('json') });
+    printWarnings(result.loaded.warnings, io);
+    // Everything is computed before anything is written.
+    mkdirSync(outDir, { recursive: true });
+    const stem = basename(input, extname(input));
+    const pdfPath = join(outDir, `${stem}.pdf`);
+    writeFileAtomic(pdfPath, result.pdf);
+    const written = [pdfPath];
+    if (result.json !== null) {
+      const jsonPath = join(outDir, `${stem}.results.json`);
+      writeFileAtomic(jsonPath, result.json);
+      written.push(jsonPath);
+    }
+    const paint = painter(io);
+    for (const line of result.summary) io.stdout(`${line}\n`);
+    for (const path of written) io.stdout(`${paint.good('wrote')} ${path}\n`);
+    return result.checksFail ? EXIT.checkFails : EXIT.ok;
+  },
+};

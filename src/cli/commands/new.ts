@@ -1,0 +1,46 @@
+// polebook new <kind> [file]: a commented starter input for a kind of structure.
+import { existsSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { EXIT } from '../../errors.ts';
+import { parseArgs, UsageError } from '../args.ts';
+import type { Command } from '../run.ts';
+import { STRUCTURE_KINDS, starterInput } from '../../input/index.ts';
+import type { StructureKind } from '../../design/design.ts';
+import { writeFileAtomic } from '../../output/write-atomic.ts';
+import { painter } from '../io.ts';
+
+const HELP = `Usage: polebook new <kind> [file] [--force]
+
+Writes a commented starter input for a kind of structure, to the file or to stdout.
+Kinds: ${STRUCTURE_KINDS.join(', ')}
+
+Options:
+  --force   overwrite the file if it exists
+`;
+
+export const newCommand: Command = {
+  name: 'new',
+  summary: `write a commented starter input (${STRUCTURE_KINDS.join(', ')})`,
+  help: HELP,
+  async run(argv, io) {
+    const args = parseArgs(argv, { flags: ['force'], values: [] });
+    const [kind, file, ...extra] = args.positionals;
+    if (kind === undefined || extra.length > 0) throw new UsageError('new takes a kind and an optional file name');
+    if (!(STRUCTURE_KINDS as readonly string[]).includes(kind)) {
+      throw new UsageError(`unknown kind '${kind}'; expected one of: ${STRUCTURE_KINDS.join(', ')}`);
+    }
+    const text = starterInput(kind as StructureKind);
+    if (file === undefined) {
+      io.stdout(text);
+      return EXIT.ok;
+    }
+    const path = resolve(io.cwd, file);
+    if (existsSync(path) && !args.flags.has('force')) {
+      io.stderr(`${painter(io).error('error:')} ${path} exists; use --force to overwrite it\n`);
+      return EXIT.badInput;
+    }
+    writeFileAtomic(path, text);
+    io.stdout(`${painter(io).good('wrote')} ${path}\nEdit it, then: polebook check ${file} && polebook build ${file}\n`);
+    return EXIT.ok;
+  },
+};
