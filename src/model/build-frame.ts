@@ -1,0 +1,159 @@
+// The frame model built from the design: the pole and each arm as chains of prismatic
+// segments, rigid offsets from the pole axis to each arm root at the pole face, the base
+// support, and the attachment masses.
+//
+// Conventions (printed in the package):
+// - Nodes are numbered along members: pole base to top, then each arm root to tip, so the
+//   stiffness matrix has a narrow band. An arm's root is the pole node at its attach
+//   height; its first element reaches the pole face through a rigid offset (offsetI_m),
+//   horizontal, of length equal to the pole's outside radius there (across flats / 2).
+// - Local axes: pole elements take refVector = global X (local y = X, z = Y); arm
+//   elements take refVector = global Z (local y in the vertical plane of the arm,
+//   z horizontal). Round and regular multisided tubes have Iy = Iz.
+// - Segment properties: the flexibility-equivalent prismatic element (harmonic means of A,
+//   I and J over the segment, see segment-properties.ts); the convergence study is in
+//   tests/model/segment-convergence.test.ts.
+// - Base: 'fixed' restrains all six dofs; 'spring' restrains the three translations and
+//   the torsion rz, with rotational springs on rx and ry.
+import type { Attachment, Design } from '../design/design.ts';
+import type { FrameElement, FrameModel, FrameNode, LumpedMass, MemberInfo, Support, Vec3 } from './frame.ts';
+import { STANDARD_GRAVITY_mps2 } from './gravity.ts';
+import { memberAxes, pointOnAxis, type MemberAxis } from './member-axes.ts';
+import { segmentProperties, type SegmentRule } from './segment-properties.ts';
+import { memberStations, type RequiredPoint, type Station } from './stations.ts';
+import { diameterAt } from './taper.ts';
+import { cross, norm, sub } from './vec3.ts';
+
+export interface BuildFrameOptions {
+  /** Regular segments per member (more nodes are added at attachments and arm roots). */
+  readonly segmentsPerMember?: number;
+  readonly segmentRule?: SegmentRule;
+}
+
+export const POLE_REF_VECTOR: Vec3 = [1, 0, 0];
+export const ARM_REF_VECTOR: Vec3 = [0, 0, 1];
+
+/** Weight of an attachment (panel: weight per area times face area). */
+export function attachmentWeight_N(a: Attachment): number {
+  return a.kind === 'panel' ? a.weightPerArea_Pa * a.width_m * a.height_m : a.weight_N;
+}
+
+export function buildFrame(design: Design, opts: BuildFrameOptions = {}): FrameModel {
+  const segments = opts.segmentsPerMember ?? design.analysis.segmentsPerMember;
+  const rule = opts.segmentRule ?? 'flexibility';
+  const axes = memberAxes(design);
+  const ids = new Set<string>();
+  for (const ax of axes) {
+    if (ids.has(ax.id)) throw new RangeError(`member id '${ax.id}' is used twice`);
+    ids.add(ax.id);
+  }
+  for (const a of design.attachments) {
+    if (!ids.has(a.member)) throw new RangeError(`attachment ${a.id} is on member '${a.member}', which does not exist`);
+  }
+
+  const nodes: FrameNode[] = [];
+  const elements: FrameElement[] = [];
+  const members: MemberInfo[] = [];
+  /** Node id at each station, per member, for masses and tests. */
+  const stationNodes = new Map<string, { s_m: number; node: number }[]>();
+
+  const attachmentPoints = (member: string): RequiredPoint[] =>
+    design.attachments.filter((a) => a.member === member).map((a) => ({ s_m: a.position_m, tag: `attachment:${a.id}` }));
+
+  const addMember = (ax: MemberAxis, stations: readonly Station[], rootNode: number | null, rootOffset: Vec3) => {
+    const ref = ax.kind === 'pole' ? POLE_REF_VECTOR : ARM_REF_VECTOR;
+    if (norm(cross(ax.direction, ref)) < 1e-3) throw new RangeError(`member ${ax.id} is parallel to its reference vector`);
+    const at: { s_m: number; node: number }[] = [];
+    stations.forEach((st, k) => {
+      if (k === 0 && rootNode !== null) {
+        at.push({ s_m: st.s_m, node: rootNode });
+        return;
+      }
+      const id = nodes.length;
+      nodes.push({ id, xyz_m: pointOnAxis(ax, st.s_m), tag: st.tags.length > 0 ? st.tags.join(',') : 'segment' });
+      at.push({ s_m: st.s_m, node: id });
+    });
+    const elementIds: number[] = [];
+    for (let k = 0; k + 1 < at.length; k++) {
+      const s0 = at[k].s_m;
+      const s1 = at[k + 1].s_m;
+      const p = segmentProperties(ax.section, ax.length_m, s0, s1, rule);
+      const id = elements.length;
+      elements.push({
+        id,
+        member: ax.id,
+        i: at[k].node,
+        j: at[k + 1].node,
+        E_Pa: design.material.E_Pa,
+        G_Pa: design.material.G_Pa,
+        A_m2: p.A_m2,
+        Iy_m4: p.I_m4,
+        Iz_m4: p.I_m4,
+        J_m4: p.J_m4,
+        refVector: ref,
+        offsetI_m: k === 0 ? rootOffset : [0, 0, 0],
+        offsetJ_m: [0, 0, 0],
+        massPerLength_kgm: design.material.density_kgm3 * p.meanA_m2,
+        sI_m: s0,
+        sJ_m: s1,
+        diameterI_m: diameterAt(ax.section, ax.length_m, s0),
+        diameterJ_m: diameterAt(ax.section, ax.length_m, s1),
+      });
+      elementIds.push(id);
+    }
+    const disc = [...new Set([0, ax.length_m, ...stations.filter((s) => s.tags.length > 0).map((s) => s.s_m)])].sort((a, b) => a - b);
+    members.push({ id: ax.id, kind: ax.kind, elements: elementIds, length_m: ax.length_m, discontinuities_m: disc });
+    stationNodes.set(ax.id, at);
+  };
+
+  // Pole: base to top.
+  const pole = axes[0];
+  const poleRequired: RequiredPoint[] = [
+    { s_m: 0, tag: 'base' },
+    { s_m: pole.length_m, tag: 'pole-top' },
+    ...design.arms.map((a) => ({ s_m: a.attachHeight_m, tag: `arm-root:${a.id}` })),
+    ...attachmentPoints('pole'),
+  ];
+  addMember(pole, memberStations('pole', pole.length_m, poleRequired, segments), null, [0, 0, 0]);
+
+  // Arms: root (a pole node, reached by a rigid offset) to tip.
+  for (const ax of axes.slice(1)) {
+    const rootNode = nodeAt(stationNodes, 'pole', ax.origin_m[2]);
+    const offset = sub(ax.origin_m, nodes[rootNode].xyz_m);
+    const required: RequiredPoint[] = [{ s_m: ax.length_m, tag: `arm-tip:${ax.id}` }, ...attachmentPoints(ax.id)];
+    addMember(ax, memberStations(ax.id, ax.length_m, required, segments), rootNode, offset);
+  }
+
+  const supports: Support[] = [
+    design.pole.base.kind === 'fixed'
+      ? { node: 0, fixed: [true, true, true, true, true, true], springs: [0, 0, 0, 0, 0, 0] }
+      : {
+          node: 0,
+          fixed: [true, true, true, false, false, true],
+          springs: [0, 0, 0, design.pole.base.stiffness_Nm_per_rad, design.pole.base.stiffness_Nm_per_rad, 0],
+        },
+  ];
+
+  const masses: LumpedMass[] = design.attachments.map((a) => ({
+    node: nodeAt(stationNodes, a.member, a.position_m),
+    mass_kg: attachmentWeight_N(a) / STANDARD_GRAVITY_mps2,
+    origin: `${a.kind} ${a.id}: weight / g`,
+  }));
+
+  return { nodes, elements, supports, members, masses };
+}
+
+function nodeAt(stationNodes: Map<string, { s_m: number; node: number }[]>, member: string, s_m: number): number {
+  const list = stationNodes.get(member) ?? [];
+  let best = -1;
+  let dist = Infinity;
+  for (const st of list) {
+    const d = Math.abs(st.s_m - s_m);
+    if (d < dist) {
+      dist = d;
+      best = st.node;
+    }
+  }
+  if (best < 0) throw new RangeError(`no node on member ${member}`);
+  return best;
+}
