@@ -2,6 +2,7 @@
 // section builders in src/report/sections/ from the design and results; turned into
 // a PDF by src/report/pdf/. The renderer computes no engineering; the builders draw nothing.
 import type { CalcStep } from '../calc/step.ts';
+import type { UnitSystem } from '../units/units.ts';
 
 export type Block =
   | { readonly kind: 'heading'; readonly text: string; readonly level: 2 | 3 }
@@ -28,6 +29,8 @@ export interface DocSection {
   /** Numbered in the contents ("3 Loads"). */
   readonly title: string;
   readonly blocks: readonly Block[];
+  /** Printed after the numbered sections and lettered ("Appendix A"). Added for the input echo. */
+  readonly appendix?: boolean;
 }
 
 export interface DocumentMeta {
@@ -43,6 +46,8 @@ export interface DocumentMeta {
   readonly inputHash: string;
   readonly inputFile: string;
   readonly toolVersion: string;
+  /** The user's unit system: quantities in calculation steps print in it; it also picks the page size. */
+  readonly units: UnitSystem;
 }
 
 export interface DocumentModel {

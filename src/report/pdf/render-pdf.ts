@@ -1,0 +1,61 @@
+// The document model to PDF bytes with pdfmake. Layout only: no engineering here.
+import pdfmake from 'pdfmake';
+import type { Content, TDocumentDefinitions } from 'pdfmake/interfaces.js';
+import type { DocumentModel } from '../document.ts';
+import { labelSections } from '../section-labels.ts';
+import { blockContent, blocksContent, KEEP_WITH_NEXT_LEVEL, newCounter } from './blocks.ts';
+import { titleBlock } from './cover.ts';
+import { fontDictionary, isAllowedLocalFile } from './fonts.ts';
+import { footerFor, headerFor } from './page-frame.ts';
+import { packageDate } from './package-date.ts';
+import { DEFAULT_STYLE, PAGE_MARGINS, pageSizeFor, STYLES } from './theme.ts';
+
+/** A heading marked keep-with-next moves to the next page when less than about a quarter page is left. */
+function pageBreakBefore(node: { headlineLevel?: number; startPosition?: { verticalRatio?: number } }): boolean {
+  return node.headlineLevel === KEEP_WITH_NEXT_LEVEL && (node.startPosition?.verticalRatio ?? 0) > 0.75;
+}
+
+export function documentDefinition(doc: DocumentModel): TDocumentDefinitions {
+  const { meta } = doc;
+  const date = packageDate(meta.date);
+  const coverCounter = newCounter('', meta.units);
+  const content: Content[] = [
+    ...titleBlock(meta),
+    ...doc.cover.map((b) => blockContent(b, coverCounter)),
+    { toc: { title: { text: 'Contents', style: 'h1' }, textStyle: { fontSize: 9.5 }, numberStyle: { fontSize: 9.5 } }, pageBreak: 'before' } as Content,
+  ];
+  for (const { section, label, name } of labelSections(doc.sections)) {
+    const heading = section.appendix === true ? `${name}  ${section.title}` : `${label}  ${section.title}`;
+    content.push({ text: heading, style: 'h1', tocItem: true, tocStyle: { bold: true }, pageBreak: 'before', id: `section-${section.id}` } as Content);
+    content.push(...blocksContent(section.blocks, newCounter(label, meta.units)));
+  }
+  return {
+    pageSize: pageSizeFor(meta.units),
+    pageMargins: PAGE_MARGINS,
+    info: {
+      title: `Calculation package ${meta.structureId}, revision ${meta.revision}`,
+      author: meta.owner,
+      subject: `${meta.projectName}; input ${meta.inputFile}; input SHA-256 ${meta.inputHash}`,
+      keywords: `input-hash ${meta.inputHash}; structure ${meta.structureId}; revision ${meta.revision}`,
+      creator: `polebook ${meta.toolVersion}`,
+      producer: `polebook ${meta.toolVersion} with pdfmake`,
+      creationDate: date,
+      modDate: date,
+    },
+    defaultStyle: DEFAULT_STYLE,
+    styles: STYLES as unknown as TDocumentDefinitions['styles'],
+    header: headerFor(meta),
+    footer: footerFor(meta),
+    pageBreakBefore: pageBreakBefore as TDocumentDefinitions['pageBreakBefore'],
+    content,
+  } as TDocumentDefinitions;
+}
+
+/** Renders the package. The same model gives the same bytes (no clock, no time zone). */
+export async function renderPdf(doc: DocumentModel): Promise<Buffer> {
+  // No network, and no local files but our fonts: a document model cannot pull anything in.
+  pdfmake.setUrlAccessPolicy(() => false);
+  pdfmake.setLocalAccessPolicy(isAllowedLocalFile);
+  pdfmake.setFonts(fontDictionary());
+  return pdfmake.createPdf(documentDefinition(doc)).getBuffer();
+}

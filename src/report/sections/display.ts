@@ -1,0 +1,63 @@
+// Printing helpers for the section builders: every number leaves here with its unit,
+// in the user's system (units.ts does the conversion and the digits).
+import type { Assumption, Attachment, Offset, StructureKind, TubeSection } from '../../design/design.ts';
+import { formatNumber, formatQuantity, type Dim, type UnitSystem } from '../../units/units.ts';
+
+export interface Display {
+  readonly units: UnitSystem;
+  q(si: number, dim: Dim): string;
+  angle(rad: number): string;
+}
+
+export function display(units: UnitSystem): Display {
+  return {
+    units,
+    q: (si, dim) => formatQuantity(si, dim, units),
+    angle: (rad) => formatQuantity(rad, 'angle', units),
+  };
+}
+
+export const KIND_LABEL: Readonly<Record<StructureKind, string>> = {
+  'cantilever-sign': 'Cantilevered sign support',
+  'luminaire-pole': 'Luminaire pole',
+  'signal-support': 'Traffic-signal support',
+};
+
+export function shapeText(s: TubeSection): string {
+  return s.shape === 'round' ? 'round' : `${s.sides}-sided`;
+}
+
+/** The diameter's name says how it is measured. */
+export function diameterText(si: number, s: TubeSection, d: Display): string {
+  return s.shape === 'round' ? d.q(si, 'section') : `${d.q(si, 'section')} across flats`;
+}
+
+/** A limit given as a fraction of a length, e.g. 0.01 of the length L -> "L/100". */
+export function fractionText(ratio: number, of: string): string {
+  if (ratio <= 0) return formatNumber(ratio);
+  return `${of}/${formatNumber(1 / ratio, 4)}`;
+}
+
+export function memberText(member: string): string {
+  return member === 'pole' ? 'pole' : `arm ${member}`;
+}
+
+export function positionText(a: Attachment, d: Display): string {
+  return a.member === 'pole' ? `${d.q(a.position_m, 'length')} above base` : `${d.q(a.position_m, 'length')} from arm root`;
+}
+
+export function offsetText(a: Attachment, d: Display): string {
+  const o: Offset = a.offset;
+  if (a.member === 'pole') {
+    return o.lateral_m === 0 ? 'on the pole axis' : `${d.q(o.lateral_m, 'length')} toward ${d.angle(o.direction_rad)}`;
+  }
+  return `vertical ${d.q(o.vertical_m, 'length')}, lateral ${d.q(o.lateral_m, 'length')}`;
+}
+
+/** An assumption's value as printed: quantities in the user's units, text as given. */
+export function assumptionValue(a: Assumption, d: Display): string {
+  if (typeof a.value === 'boolean') return a.value ? 'yes' : 'no';
+  if (typeof a.value === 'string') return a.value;
+  if (a.dim !== undefined) return d.q(a.value, a.dim);
+  return formatNumber(a.value, 6);
+}

@@ -1,0 +1,28 @@
+// The meta block printed on the cover and in every footer, taken from the loaded design.
+import type { LoadedDesign } from '../../design/design.ts';
+import { toolVersion } from '../../version.ts';
+import type { DocumentMeta } from '../document.ts';
+import { KIND_LABEL } from './display.ts';
+
+export const PACKAGE_STATUS = 'DRAFT FOR REVIEW';
+
+export function documentMeta(loaded: LoadedDesign): DocumentMeta {
+  const { project, kind, units } = loaded.design;
+  // The latest revision is the last one listed.
+  const latest = project.revisions.at(-1);
+  return {
+    projectName: project.name,
+    structureId: project.structureId,
+    structureKind: KIND_LABEL[kind],
+    location: project.location,
+    owner: project.owner,
+    revision: latest?.id ?? 'none given',
+    revisionDate: latest?.date ?? 'none given',
+    status: PACKAGE_STATUS,
+    date: project.date,
+    inputHash: loaded.inputHash,
+    inputFile: loaded.file,
+    toolVersion: toolVersion(),
+    units,
+  };
+}

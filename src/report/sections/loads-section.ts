@@ -1,0 +1,115 @@
+// Section "Loads as entered": wind pressures and directions, ice, fatigue and the load
+// combinations with their factors and sources, exactly as the design holds them.
+import type { CombinationCategory, FatigueInput, LoadedDesign, LoadKind } from '../../design/design.ts';
+import { formatNumber } from '../../units/units.ts';
+import type { Block, DocSection } from '../document.ts';
+import { display, type Display } from './display.ts';
+import { templateBlocks } from './templates.ts';
+
+export const LOADS_TITLE = 'Loads as entered';
+
+const CATEGORY_LABEL: Readonly<Record<CombinationCategory, string>> = {
+  strength: 'strength',
+  'extreme-wind': 'extreme wind',
+  'extreme-ice': 'extreme wind with ice',
+  service: 'service',
+  fatigue: 'fatigue',
+};
+
+const LOAD_KINDS: readonly { kind: LoadKind; label: string }[] = [
+  { kind: 'dead', label: 'Dead' },
+  { kind: 'wind', label: 'Wind' },
+  { kind: 'ice', label: 'Ice' },
+  { kind: 'ice-wind', label: 'Wind on ice' },
+];
+
+function fatigueBlocks(f: FatigueInput, d: Display): Block[] {
+  const pressure = (p: number | null) => (p === null ? 'not applied' : d.q(p, 'pressure'));
+  return [
+    {
+      kind: 'table',
+      title: 'Fatigue loads and thresholds',
+      header: ['Item', 'Value'],
+      widths: ['*', 150],
+      rows: [
+        ['Galloping: equivalent static pressure, vertical, on attachment area', pressure(f.gallopingPressure_Pa)],
+        ['Natural wind gust: equivalent static pressure', pressure(f.naturalGustPressure_Pa)],
+        ['Truck-induced gust: equivalent static pressure', pressure(f.truckGustPressure_Pa)],
+        ['Importance factor, galloping (dimensionless)', formatNumber(f.importance.galloping)],
+        ['Importance factor, natural wind gust (dimensionless)', formatNumber(f.importance.naturalGust)],
+        ['Importance factor, truck-induced gust (dimensionless)', formatNumber(f.importance.truckGust)],
+        ['Constant-amplitude fatigue threshold, pole base detail', d.q(f.poleBaseThreshold_Pa, 'stress')],
+        ['Constant-amplitude fatigue threshold, arm root detail', d.q(f.armRootThreshold_Pa, 'stress')],
+      ],
+    },
+  ];
+}
+
+export function loadsSection(loaded: LoadedDesign): DocSection {
+  const { design } = loaded;
+  const d = display(design.units);
+  const w = design.wind;
+  const blocks: Block[] = [...templateBlocks('loads', {}).blocks];
+
+  blocks.push({
+    kind: 'table',
+    title: 'Design wind pressures',
+    header: ['Applied to', 'Pressure'],
+    widths: ['*', 150],
+    rows: [
+      ['Members (pole and arms), on the projected tube area', d.q(w.membersPressure_Pa, 'pressure')],
+      ['Sign panels, on the panel area', d.q(w.panelsPressure_Pa, 'pressure')],
+      ['Luminaires, signal heads and other point attachments, on their wind area', d.q(w.pointsPressure_Pa, 'pressure')],
+    ],
+  });
+
+  blocks.push({
+    kind: 'table',
+    title: 'Wind directions',
+    header: ['Direction', 'Plan angle the wind blows toward'],
+    widths: ['*', 150],
+    rows: w.directions.map((x) => [x.label, d.angle(x.angle_rad)]),
+    note: 'Angles are measured in plan from +X toward +Y. Each direction is a separate wind load case.',
+  });
+
+  if (design.ice === null) {
+    blocks.push({ kind: 'paragraph', text: 'Ice: none entered. No combination with ice is analysed.' });
+  } else {
+    blocks.push({
+      kind: 'table',
+      title: 'Ice',
+      header: ['Item', 'Value'],
+      widths: ['*', 150],
+      rows: [
+        ['Ice weight per surface area, on members and attachments', d.q(design.ice.weightPerArea_Pa, 'pressure')],
+        ['Factor on the design wind pressures acting with ice (dimensionless)', formatNumber(design.ice.windFactor)],
+      ],
+    });
+  }
+
+  if (design.fatigue === null) {
+    blocks.push({ kind: 'paragraph', text: 'Fatigue: not part of this design (no fatigue loads entered).' });
+  } else {
+    blocks.push(...fatigueBlocks(design.fatigue, d));
+  }
+
+  blocks.push({
+    kind: 'table',
+    title: 'Load combinations',
+    header: ['Id', 'Category', 'Description', ...LOAD_KINDS.map((k) => k.label), 'Source of the factors'],
+    widths: [40, 48, '*', 28, 28, 28, 34, '*'],
+    rows: design.combinations.map((c) => [
+      c.id,
+      CATEGORY_LABEL[c.category],
+      c.description,
+      ...LOAD_KINDS.map((k) => {
+        const f = c.factors[k.kind];
+        return f === undefined ? '–' : formatNumber(f);
+      }),
+      c.source,
+    ]),
+    note: 'Load factors are dimensionless; "–" means the load does not enter the combination. Combinations are analysed as combined loads, each as its own analysis.',
+  });
+
+  return { id: 'loads', title: LOADS_TITLE, blocks };
+}
