@@ -6,7 +6,8 @@ import type { FrameModel } from '../model/frame.ts';
 import type { AppliedLoad, Combination, LoadCase } from '../loads/load-types.ts';
 import type { AnalysisResults, Mode } from '../analysis/analysis-types.ts';
 import type { LoadedDesign } from '../design/design.ts';
-import { factoredLoads } from '../loads/factored-loads.ts';
+import { scaleLoad } from '../loads/scale-load.ts';
+import { combinedLoads } from '../analysis/analyze.ts';
 
 export const RESULTS_FORMAT = 'polebook-results';
 export const RESULTS_FORMAT_VERSION = 1;
@@ -88,7 +89,7 @@ export function resultsJson(input: ResultsJsonInput): string {
     loadCases: cases.map((c) => ({ id: c.id, kind: c.kind, description: c.description, windAngle_rad: c.windAngle_rad, loads: c.loads.map(loadRecord) })),
     combinations: combinations.map((c) => ({
       id: c.id, category: c.category, description: c.description, source: c.source, factors: c.factors,
-      loads: factoredLoads(cases, c).map(loadRecord),
+      loads: combinedLoads(cases, c).map(({ load, factor }) => loadRecord(scaleLoad(load, factor))),
     })),
     results: Object.values(results).map((r) => ({
       combination: r.combination,
