@@ -1,0 +1,111 @@
+// Element loads resolved into element local axes, and their fixed-end forces.
+import type { AppliedLoad, DistributedLoad, ElementPointLoad } from '../loads/load-types.ts';
+import type { Vec3 } from '../model/frame.ts';
+import { toLocal3 } from './element-geometry.ts';
+import { GAUSS3, hermite, hermiteSlope } from './shape-functions.ts';
+
+/** Positions closer than this are the same point (m). */
+export const SNAP_M = 1e-6;
+
+export type LocalLoad =
+  | { readonly kind: 'distributed'; readonly a: number; readonly b: number; readonly qA: Vec3; readonly qB: Vec3 }
+  | { readonly kind: 'force'; readonly a: number; readonly F: Vec3 }
+  | { readonly kind: 'moment'; readonly a: number; readonly M: Vec3 };
+
+function unitDirection(v: Vec3, what: string): Vec3 {
+  const n = Math.hypot(v[0], v[1], v[2]);
+  if (!(Math.abs(n - 1) < 1e-6)) throw new Error(`${what}: direction is not a unit vector (length ${n})`);
+  return v;
+}
+
+function position(a: number, L: number, what: string): number {
+  if (a < -SNAP_M || a > L + SNAP_M || !Number.isFinite(a)) {
+    throw new Error(`${what}: position ${a} m lies outside the element's clear length ${L} m`);
+  }
+  return Math.min(Math.max(a, 0), L);
+}
+
+/** Resolves one element load (scaled by factor) into local components. */
+export function resolveElementLoad(
+  load: DistributedLoad | ElementPointLoad,
+  R: Float64Array,
+  L: number,
+  factor: number,
+): LocalLoad {
+  const what = `load '${load.origin.source}' on element ${load.element}`;
+  const dir = unitDirection(load.direction, what);
+  const local = load.axes === 'local' ? ([dir[0], dir[1], dir[2]] as Vec3) : toLocal3(R, dir);
+  const scaled = (w: number): Vec3 => [local[0] * w * factor, local[1] * w * factor, local[2] * w * factor];
+  if (load.kind === 'distributed') {
+    const a = position(load.a_m, L, what);
+    const b = position(load.b_m, L, what);
+    if (b < a) throw new Error(`${what}: end b_m before start a_m`);
+    return { kind: 'distributed', a, b, qA: scaled(load.wA_Npm), qB: scaled(load.wB_Npm) };
+  }
+  const a = position(load.a_m, L, what);
+  return load.kind === 'point-force' ? { kind: 'force', a, F: scaled(load.value) } : { kind: 'moment', a, M: scaled(load.value) };
+}
+
+export function isElementLoad(l: AppliedLoad): l is DistributedLoad | ElementPointLoad {
+  return l.kind !== 'nodal';
+}
+
+/** Intensity of a distributed load at x (inside [a, b]). */
+export function intensityAt(l: Extract<LocalLoad, { kind: 'distributed' }>, x: number): Vec3 {
+  const t = l.b > l.a ? (x - l.a) / (l.b - l.a) : 0;
+  return [l.qA[0] + (l.qB[0] - l.qA[0]) * t, l.qA[1] + (l.qB[1] - l.qA[1]) * t, l.qA[2] + (l.qB[2] - l.qA[2]) * t];
+}
+
+/** Adds the work-equivalent end loads of a force F at x. */
+function addForce(eq: Float64Array, F: Vec3, x: number, L: number, w: number): void {
+  const s = x / L;
+  const [n1, n2, n3, n4] = hermite(x, L);
+  eq[0] += w * (1 - s) * F[0];
+  eq[6] += w * s * F[0];
+  eq[1] += w * n1 * F[1];
+  eq[5] += w * n2 * F[1];
+  eq[7] += w * n3 * F[1];
+  eq[11] += w * n4 * F[1];
+  eq[2] += w * n1 * F[2];
+  eq[4] -= w * n2 * F[2];
+  eq[8] += w * n3 * F[2];
+  eq[10] -= w * n4 * F[2];
+}
+
+/**
+ * Fixed-end forces in local axes: the forces on the element by fully restrained ends under the
+ * element loads, = -(integral of N^T q). A linear load times a cubic shape function is a quartic,
+ * which 3-point Gauss quadrature integrates exactly.
+ */
+export function fixedEndForces(loads: readonly LocalLoad[], L: number): Float64Array {
+  const eq = new Float64Array(12);
+  for (const l of loads) {
+    if (l.kind === 'distributed') {
+      const half = (l.b - l.a) / 2;
+      if (half <= 0) continue;
+      for (let g = 0; g < 3; g++) {
+        const x = l.a + half * (1 + GAUSS3.t[g]);
+        addForce(eq, intensityAt(l, x), x, L, GAUSS3.w[g] * half);
+      }
+    } else if (l.kind === 'force') {
+      addForce(eq, l.F, l.a, L, 1);
+    } else {
+      const s = l.a / L;
+      const [d1, d2, d3, d4] = hermiteSlope(l.a, L);
+      const [mx, my, mz] = l.M;
+      eq[3] += (1 - s) * mx;
+      eq[9] += s * mx;
+      eq[1] += d1 * mz;
+      eq[5] += d2 * mz;
+      eq[7] += d3 * mz;
+      eq[11] += d4 * mz;
+      // ry = -dw/dx, so a moment about y does work my * (-w')
+      eq[2] -= d1 * my;
+      eq[4] += d2 * my;
+      eq[8] -= d3 * my;
+      eq[10] += d4 * my;
+    }
+  }
+  for (let k = 0; k < 12; k++) eq[k] = -eq[k];
+  return eq;
+}

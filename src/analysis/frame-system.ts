@@ -1,0 +1,228 @@
+// The frame as a linear system: prepared elements, assembly of K (+ Kg), load vector,
+// factorisation with the mechanism check, and recovery of element end forces and reactions.
+import { UnstableStructureError } from '../errors.ts';
+import type { AppliedLoad, NodalLoad } from '../loads/load-types.ts';
+import type { FrameElement, FrameModel, Vec6 } from '../model/frame.ts';
+import type { Reaction } from './analysis-types.ts';
+import { BandedMatrix, PivotFailure } from './banded-ldlt.ts';
+import { DOF_NAMES, dofLabel, numberDofs, type DofMap } from './dof-numbering.ts';
+import { elementGeometry, type ElementGeometry } from './element-geometry.ts';
+import { fixedEndForces, isElementLoad, resolveElementLoad, type LocalLoad } from './element-loads.ts';
+import {
+  congruent12,
+  elasticStiffnessLocal,
+  elementTransform,
+  geometricStiffnessLocal,
+  mulTVec12,
+  mulVec12,
+} from './element-matrices.ts';
+
+export interface PreparedElement {
+  readonly el: FrameElement;
+  readonly geo: ElementGeometry;
+  /** Global node dofs -> local end dofs (rotation and rigid offsets). */
+  readonly T: Float64Array;
+  readonly kLocal: Float64Array;
+  readonly kGlobal: Float64Array;
+  /** Global dof indices (node*6 + c) of the element's 12 node dofs. */
+  readonly dofs: Int32Array;
+}
+
+export interface PreparedModel {
+  readonly model: FrameModel;
+  readonly elements: readonly PreparedElement[];
+  readonly dofs: DofMap;
+  /** Number of elements attached to each node. */
+  readonly degree: Int32Array;
+}
+
+export function prepareModel(model: FrameModel): PreparedModel {
+  const elements = model.elements.map((el, idx): PreparedElement => {
+    if (el.id !== idx) throw new Error(`element id ${el.id} differs from its index ${idx}`);
+    const geo = elementGeometry(model, el);
+    const T = elementTransform(geo.R, el.offsetI_m, el.offsetJ_m);
+    const kLocal = elasticStiffnessLocal(el, geo.L);
+    const dofs = new Int32Array(12);
+    for (let c = 0; c < 6; c++) {
+      dofs[c] = el.i * 6 + c;
+      dofs[6 + c] = el.j * 6 + c;
+    }
+    return { el, geo, T, kLocal, kGlobal: congruent12(T, kLocal), dofs };
+  });
+  model.nodes.forEach((n, idx) => {
+    if (n.id !== idx) throw new Error(`node id ${n.id} differs from its index ${idx}`);
+  });
+  const degree = new Int32Array(model.nodes.length);
+  for (const el of model.elements) {
+    degree[el.i]++;
+    degree[el.j]++;
+  }
+  return { model, elements, dofs: numberDofs(model), degree };
+}
+
+/** Loads of one analysis, already multiplied by their combination factors. */
+export interface LoadSet {
+  /** Nodal loads, global, node*6 + c. */
+  readonly nodal: Float64Array;
+  readonly nodesLoaded: ReadonlySet<number>;
+  /** Element loads in local axes, per element. */
+  readonly local: readonly (readonly LocalLoad[])[];
+  /** Fixed-end forces per element (local), or null when unloaded. */
+  readonly fixedEnd: readonly (Float64Array | null)[];
+}
+
+export interface FactoredLoad {
+  readonly load: AppliedLoad;
+  readonly factor: number;
+}
+
+export function buildLoadSet(prep: PreparedModel, loads: readonly FactoredLoad[]): LoadSet {
+  const { model } = prep;
+  const nodal = new Float64Array(model.nodes.length * 6);
+  const nodesLoaded = new Set<number>();
+  const local: LocalLoad[][] = model.elements.map(() => []);
+  for (const { load, factor } of loads) {
+    if (factor === 0) continue;
+    if (isElementLoad(load)) {
+      const pe = prep.elements[load.element];
+      if (!pe) throw new Error(`load '${load.origin.source}' names element ${load.element}, which does not exist`);
+      local[load.element].push(resolveElementLoad(load, pe.geo.R, pe.geo.L, factor));
+    } else {
+      addNodal(nodal, load, factor, model);
+      nodesLoaded.add(load.node);
+    }
+  }
+  const fixedEnd = prep.elements.map((pe, e) => (local[e].length ? fixedEndForces(local[e], pe.geo.L) : null));
+  return { nodal, nodesLoaded, local, fixedEnd };
+}
+
+function addNodal(nodal: Float64Array, l: NodalLoad, factor: number, model: FrameModel): void {
+  if (!model.nodes[l.node]) throw new Error(`load '${l.origin.source}' names node ${l.node}, which does not exist`);
+  for (let c = 0; c < 3; c++) {
+    nodal[l.node * 6 + c] += factor * l.F_N[c];
+    nodal[l.node * 6 + 3 + c] += factor * l.M_Nm[c];
+  }
+}
+
+/** Right-hand side: nodal loads plus the equivalent nodal loads -T^T f_fixed of element loads. */
+export function loadVector(prep: PreparedModel, ls: LoadSet): Float64Array {
+  const full = Float64Array.from(ls.nodal);
+  prep.elements.forEach((pe, e) => {
+    const fef = ls.fixedEnd[e];
+    if (!fef) return;
+    const g = mulTVec12(pe.T, fef);
+    for (let k = 0; k < 12; k++) full[pe.dofs[k]] -= g[k];
+  });
+  return restrict(prep, full);
+}
+
+export function restrict(prep: PreparedModel, full: ArrayLike<number>): Float64Array {
+  const { eq, nEq } = prep.dofs;
+  const out = new Float64Array(nEq);
+  for (let d = 0; d < eq.length; d++) if (eq[d] >= 0) out[eq[d]] = full[d];
+  return out;
+}
+
+export function expand(prep: PreparedModel, x: ArrayLike<number>): Float64Array {
+  const { eq } = prep.dofs;
+  const full = new Float64Array(eq.length);
+  for (let d = 0; d < eq.length; d++) if (eq[d] >= 0) full[d] = x[eq[d]];
+  return full;
+}
+
+/** Assembles K, plus the geometric stiffness when axial forces (tension +) are given. */
+export function assemble(prep: PreparedModel, axialN: Float64Array | null): BandedMatrix {
+  const { eq, nEq, bw } = prep.dofs;
+  const K = new BandedMatrix(nEq, bw);
+  for (let e = 0; e < prep.elements.length; e++) {
+    const pe = prep.elements[e];
+    let ke = pe.kGlobal;
+    const N = axialN ? axialN[e] : 0;
+    if (N !== 0) {
+      const kg = congruent12(pe.T, geometricStiffnessLocal(pe.el, pe.geo.L, N));
+      ke = ke.map((v, idx) => v + kg[idx]);
+    }
+    for (let a = 0; a < 12; a++) {
+      const ea = eq[pe.dofs[a]];
+      if (ea < 0) continue;
+      for (let b = 0; b < 12; b++) {
+        const eb = eq[pe.dofs[b]];
+        if (eb < ea) continue;
+        const v = ke[a * 12 + b];
+        if (v !== 0) K.add(ea, eb, v);
+      }
+    }
+  }
+  for (const s of prep.model.supports) {
+    for (let c = 0; c < 6; c++) {
+      const e = eq[s.node * 6 + c];
+      if (e >= 0 && s.springs[c] > 0) K.add(e, e, s.springs[c]);
+    }
+  }
+  return K;
+}
+
+/** Factorises K; a vanishing or negative pivot becomes an UnstableStructureError naming the dof. */
+export function factorOrThrow(prep: PreparedModel, K: BandedMatrix, combination: string | undefined, secondOrder: boolean): void {
+  try {
+    K.factor();
+  } catch (err) {
+    if (!(err instanceof PivotFailure)) throw err;
+    const dof = prep.dofs.dofOfEq[err.eq];
+    const label = dofLabel(prep.model, dof);
+    const where = combination ? `combination ${combination}: ` : '';
+    const why = secondOrder
+      ? `loss of stability in the second-order analysis: the stiffness with geometric stiffness (K + Kg) is not positive definite at ${label} (pivot ${err.pivot.toExponential(3)}, diagonal ${err.diagonal.toExponential(3)}); the axial loads reach a buckling load`
+      : `the structure is a mechanism or is not supported: no stiffness against ${label} (pivot ${err.pivot.toExponential(3)}, diagonal ${err.diagonal.toExponential(3)})`;
+    throw new UnstableStructureError(`${where}${why}`, {
+      combination,
+      node: Math.floor(dof / 6),
+      dof: DOF_NAMES[dof % 6],
+    });
+  }
+}
+
+/** Displacements of the element's clear ends in local axes. */
+export function localEndDisplacements(pe: PreparedElement, U: ArrayLike<number>): Float64Array {
+  const dg = new Float64Array(12);
+  for (let k = 0; k < 12; k++) dg[k] = U[pe.dofs[k]];
+  return mulVec12(pe.T, dg);
+}
+
+/** End forces on the element by the nodes, local: (k + kg(N)) d + f_fixed. */
+export function elementEndForces(pe: PreparedElement, U: ArrayLike<number>, fef: Float64Array | null, N: number): Float64Array {
+  const d = localEndDisplacements(pe, U);
+  const f = mulVec12(pe.kLocal, d);
+  if (N !== 0) {
+    const g = mulVec12(geometricStiffnessLocal(pe.el, pe.geo.L, N), d);
+    for (let k = 0; k < 12; k++) f[k] += g[k];
+  }
+  if (fef) for (let k = 0; k < 12; k++) f[k] += fef[k];
+  return f;
+}
+
+/** Mean axial force (tension +) of each element from its elastic end forces. */
+export function axialForces(prep: PreparedModel, U: ArrayLike<number>, ls: LoadSet): Float64Array {
+  return Float64Array.from(prep.elements, (pe, e) => {
+    const f = elementEndForces(pe, U, ls.fixedEnd[e], 0);
+    return (f[6] - f[0]) / 2;
+  });
+}
+
+/** Reactions by the supports on the structure, global: node equilibrium at fixed dofs, -k u at springs. */
+export function reactions(prep: PreparedModel, U: ArrayLike<number>, ls: LoadSet, endForces: readonly Float64Array[]): Reaction[] {
+  const nodeForce = new Float64Array(prep.model.nodes.length * 6);
+  prep.elements.forEach((pe, e) => {
+    const g = mulTVec12(pe.T, endForces[e]);
+    for (let k = 0; k < 12; k++) nodeForce[pe.dofs[k]] += g[k];
+  });
+  return prep.model.supports.map((s): Reaction => {
+    const force = [0, 0, 0, 0, 0, 0];
+    for (let c = 0; c < 6; c++) {
+      const d = s.node * 6 + c;
+      if (s.fixed[c]) force[c] = nodeForce[d] - ls.nodal[d];
+      else if (s.springs[c] > 0) force[c] = -s.springs[c] * U[d];
+    }
+    return { node: s.node, force: force as unknown as Vec6 };
+  });
+}
