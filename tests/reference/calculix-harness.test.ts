@@ -8,12 +8,12 @@ import { roundTubeSection, pipeFromSection } from './calculix/pipe-from-section.
 import { runCalculix } from './calculix/run-calculix.ts';
 import { writeCalculixInput, field } from './calculix/write-input.ts';
 import { parseFortranNumber } from './calculix/parse-dat.ts';
-import { hasCcx, CCX_ABSENT_MESSAGE } from './calculix/has-ccx.ts';
-import { treeTranslations } from './calculix/tree-closed-form.ts';
-import { norm, sub, scale, add } from './calculix/vec3.ts';
+import { ccxAvailableOrSkip } from './calculix/has-ccx.ts';
+import { treeMotions, treeTranslations } from './calculix/tree-closed-form.ts';
+import { rotationFromProbes } from './calculix/run-calculix.ts';
+import { norm, sub, scale, add, cross, unit } from './calculix/vec3.ts';
 
-const ccxPresent = hasCcx();
-if (!ccxPresent) console.warn(CCX_ABSENT_MESSAGE);
+const ccxPresent = ccxAvailableOrSkip();
 
 // Steel moduli, typical values (E = 200 GPa, G = 77 GPa), verify against the governing code;
 // any values serve here since both sides use the same ones.
@@ -53,6 +53,14 @@ describe('CalculiX deck writer (no ccx needed)', () => {
   it('reads Fortran numbers, including three-digit exponents written without E', () => {
     expect(parseFortranNumber('-1.234567E-03')).toBeCloseTo(-1.234567e-3, 15);
     expect(parseFortranNumber('1.234567-100')).toBe(1.234567e-100);
+  });
+
+  it('recovers a rotation from two probe offsets w = theta x d (vector identity)', () => {
+    const theta: Vec3 = [1.5e-3, -2e-4, 7e-4];
+    const a = unit([0.61, 0.37, 0.7]);
+    const b = unit(cross(a, [0.2, -0.9, 0.35]));
+    const got = rotationFromProbes(a, cross(theta, a), b, cross(theta, b));
+    expect(norm(sub(got, theta)) / norm(theta)).toBeLessThan(1e-12);
   });
 
   it('rejects loads it does not represent instead of dropping them', () => {
@@ -154,10 +162,13 @@ describe.skipIf(!ccxPresent)('CalculiX harness against closed forms', () => {
     const tip = s.chain('A1', top, add(add(s.xyz(top), off), scale(dir, 9)), [arm, arm], [0, 0, 1], off);
     const model = s.build(base);
     const loads = [nodalLoad(tip, [300, -500, -800], [200, -300, 150]), nodalLoad(top, [0, 0, 0], [0, 0, 900])];
-    const r = await runCalculix(model, loads);
-    const expected = treeTranslations(model, loads);
+    const r = await runCalculix(model, loads, { rotationProbes: [top, tip] });
+    const expected = treeMotions(model, loads);
     for (const n of [top, tip, 1, 3]) {
-      expect(vecError(r.translations_m[n]!, expected[n]!)).toBeLessThan(CLOSED_FORM_TOL);
+      expect(vecError(r.translations_m[n]!, expected[n]!.u)).toBeLessThan(CLOSED_FORM_TOL);
+    }
+    for (const n of [top, tip]) {
+      expect(vecError(r.rotations_rad.get(n)!, expected[n]!.theta)).toBeLessThan(CLOSED_FORM_TOL);
     }
   });
 
@@ -187,6 +198,53 @@ describe.skipIf(!ccxPresent)('CalculiX harness against closed forms', () => {
       exact += (P / (3 * E_Pa * t.I_m4)) * ((L - a) ** 3 - (L - b) ** 3);
     });
     expect(Math.abs(r.translations_m[tip]![1] / exact - 1)).toBeLessThan(CLOSED_FORM_TOL);
+  });
+
+  it('rotations from probes: cantilever tip P L^2/(2EI) and twist T L/(GJ) (beam-formula tables, uniform torsion)', async () => {
+    const tp = tube(0.3, 0.006);
+    const L = 10;
+    const P = 1500;
+    const T = 2000;
+    const s = new FrameSketch();
+    const base = s.node([0, 0, 0], 'base');
+    const tip = s.chain('pole', base, [0, 0, L], [tp, tp], [1, 0, 0]);
+    const r = await runCalculix(s.build(base), [nodalLoad(tip, [P, 0, 0], [0, 0, T])], { rotationProbes: [tip] });
+    const rot = r.rotations_rad.get(tip)!;
+    // Force +X on a pole along +Z turns the tip about +Y.
+    expect(Math.abs(rot[1] / ((P * L * L) / (2 * E_Pa * tp.I_m4)) - 1)).toBeLessThan(CLOSED_FORM_TOL);
+    expect(Math.abs(rot[2] / ((T * L) / (G_Pa * tp.J_m4)) - 1)).toBeLessThan(CLOSED_FORM_TOL);
+    expect(Math.abs(rot[0])).toBeLessThan(1e-3 * Math.abs(rot[1]));
+  });
+
+  it('rotations from probes on the L-frame: joint rotation P a h/(EI) (moment-area, DESIGN.md section 8)', async () => {
+    const t = tube(0.35, 0.008);
+    const h = 7;
+    const a = 8;
+    const P = -3000;
+    const s = new FrameSketch();
+    const base = s.node([0, 0, 0]);
+    const top = s.chain('pole', base, [0, 0, h], [t, t], [1, 0, 0]);
+    const tip = s.chain('A1', top, [a, 0, h], [t, t], [0, 0, 1]);
+    const model = s.build(base);
+    const loads = [nodalLoad(tip, [0, 0, P])];
+    const r = await runCalculix(model, loads, { rotationProbes: [top, tip] });
+    // The arm tip drops, so the joint turns about +Y by |P| a h/(EI).
+    expect(Math.abs(r.rotations_rad.get(top)![1] / ((-P * a * h) / (E_Pa * t.I_m4)) - 1)).toBeLessThan(CLOSED_FORM_TOL);
+    const tipRotation = treeMotions(model, loads)[tip]!.theta;
+    expect(vecError(r.rotations_rad.get(tip)!, tipRotation)).toBeLessThan(CLOSED_FORM_TOL);
+  });
+
+  it('rotation probes leave the translations unchanged (they carry no load)', async () => {
+    const t = tube(0.3, 0.006);
+    const s = new FrameSketch();
+    const base = s.node([0, 0, 0]);
+    const mid = s.chain('pole', base, [0, 0, 5], [t, t], [1, 0, 0]);
+    const tip = s.chain('pole', mid, [0, 0, 10], [t, t], [1, 0, 0]);
+    const loads = [nodalLoad(tip, [800, -600, -2000])];
+    const plain = await runCalculix(s.build(base), loads);
+    const probed = await runCalculix(s.build(base), loads, { rotationProbes: [mid, tip] });
+    expect(vecError(probed.translations_m[tip]!, plain.translations_m[tip]!)).toBeLessThan(1e-3);
+    expect(vecError(probed.translations_m[mid]!, plain.translations_m[mid]!)).toBeLessThan(1e-3);
   });
 
   it('reactions by statics: base moment of a tip-loaded cantilever is P L (beam-formula tables)', async () => {

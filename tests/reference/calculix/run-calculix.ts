@@ -1,13 +1,15 @@
 // Runs ccx on a FrameModel in a fresh temporary folder and reads back the translations of
-// every frame node. Rotations of beam nodes are not printed by ccx for expanded beams, so
-// only translations are returned. Reactions come from statics (see statics.ts).
+// every frame node. ccx prints no rotations for expanded beams: rotations are recovered only
+// at the nodes asked for, from two rigid probe stubs each (see write-input.ts).
+// Reactions come from statics (see statics.ts).
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { FrameModel, Vec3, Vec6 } from '../../../src/model/frame.ts';
 import type { NodalLoad } from '../../../src/loads/load-types.ts';
-import { ccxNodeId, writeCalculixInput, type CalculixDeckOptions } from './write-input.ts';
+import { buildCalculixDeck, ccxNodeId, type CalculixDeckOptions, type RotationProbe } from './write-input.ts';
+import { cross, dot, scale, sub, unit, add } from './vec3.ts';
 import { parseDatDisplacements } from './parse-dat.ts';
 import { reactionsByStatics } from './statics.ts';
 
@@ -16,6 +18,8 @@ export interface CalculixResult {
   readonly translations_m: readonly Vec3[];
   /** Support reactions by statics of the same loads (single fixed support only). */
   readonly reactions: readonly { node: number; force: Vec6 }[];
+  /** Rotations [rx, ry, rz] of the nodes given in options.rotationProbes. */
+  readonly rotations_rad: ReadonlyMap<number, Vec3>;
   readonly deck: string;
 }
 
@@ -30,7 +34,7 @@ export async function runCalculix(
   loads: readonly NodalLoad[],
   options: RunOptions = {},
 ): Promise<CalculixResult> {
-  const deck = writeCalculixInput(model, loads, options);
+  const { deck, probes } = buildCalculixDeck(model, loads, options);
   const dir = mkdtempSync(join(tmpdir(), 'polebook-ccx-'));
   try {
     writeFileSync(join(dir, 'frame.inp'), deck);
@@ -51,8 +55,31 @@ export async function runCalculix(
       if (u === undefined) throw new Error(`CalculiX harness: no displacement printed for frame node ${n.id}`);
       return u;
     });
-    return { translations_m, reactions: reactionsByStatics(model, loads), deck };
+    const rotations_rad = new Map<number, Vec3>();
+    for (let k = 0; k + 1 < probes.length; k += 2) {
+      const at = (p: RotationProbe): Vec3 => {
+        const u = disp.get(p.ccxNode);
+        if (u === undefined) throw new Error(`CalculiX harness: no displacement printed for probe ${p.ccxNode}`);
+        return scale(sub(u, translations_m[p.frameNode]!), 1 / p.length_m);
+      };
+      rotations_rad.set(probes[k]!.frameNode, rotationFromProbes(probes[k]!.direction, at(probes[k]!), probes[k + 1]!.direction, at(probes[k + 1]!)));
+    }
+    return { translations_m, reactions: reactionsByStatics(model, loads), rotations_rad, deck };
   } finally {
     if (options.keepFiles !== true) rmSync(dir, { recursive: true, force: true });
   }
+}
+
+/**
+ * Small rotation theta from w_a = theta x a and w_b = theta x b (a, b orthonormal, c = a x b):
+ * theta.a = w_b.c, theta.b = -w_a.c, theta.c = w_a.b = -w_b.a (both used, averaged).
+ */
+export function rotationFromProbes(a: Vec3, wa: Vec3, b: Vec3, wb: Vec3): Vec3 {
+  const ua = unit(a);
+  const ub = unit(b);
+  const c = cross(ua, ub);
+  const ta = dot(wb, c);
+  const tb = -dot(wa, c);
+  const tc = (dot(wa, ub) - dot(wb, ua)) / 2;
+  return add(add(scale(ua, ta), scale(ub, tb)), scale(c, tc));
 }

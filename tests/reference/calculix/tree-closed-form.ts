@@ -10,7 +10,7 @@ import type { FrameModel, Vec3 } from '../../../src/model/frame.ts';
 import type { NodalLoad } from '../../../src/loads/load-types.ts';
 import { add, cross, dot, scale, sub, unit, norm } from './vec3.ts';
 
-interface EndMotion {
+export interface EndMotion {
   readonly u: Vec3;
   readonly theta: Vec3;
 }
@@ -34,12 +34,16 @@ export function cantileverEnd(
   return { u, theta };
 }
 
+export function treeTranslations(model: FrameModel, loads: readonly NodalLoad[]): Vec3[] {
+  return treeMotions(model, loads).map((m) => m.u);
+}
+
 /**
- * Translations of every node of a tree-shaped FrameModel with one fully fixed support.
+ * Translations and rotations of every node of a tree-shaped FrameModel with one fully fixed support.
  * Each element must be oriented from the root outward (end i nearer the support) and have
  * Iy = Iz (round tube): the tables above are for a section with one I.
  */
-export function treeTranslations(model: FrameModel, loads: readonly NodalLoad[]): Vec3[] {
+export function treeMotions(model: FrameModel, loads: readonly NodalLoad[]): EndMotion[] {
   if (model.supports.length !== 1) throw new Error('tree closed form: one support expected');
   const root = model.supports[0]!.node;
   const parentElement = new Map<number, number>(); // node -> element reaching it from the root side
@@ -62,12 +66,13 @@ export function treeTranslations(model: FrameModel, loads: readonly NodalLoad[])
   }
   if (path.size !== model.nodes.length) throw new Error('tree closed form: every node must hang from the support');
   const xyz = (n: number): Vec3 => model.nodes[n]!.xyz_m;
-  const result: Vec3[] = model.nodes.map(() => [0, 0, 0]);
+  const result: EndMotion[] = model.nodes.map(() => ({ u: [0, 0, 0], theta: [0, 0, 0] }));
   for (const load of loads) {
     const loadPath = path.get(load.node)!;
     for (const q of model.nodes) {
       const qPath = new Set(path.get(q.id)!);
       let u: Vec3 = [0, 0, 0];
+      let theta: Vec3 = [0, 0, 0];
       for (const e of loadPath) {
         if (!qPath.has(e)) continue; // the element carries the load but does not carry q
         const el = model.elements[e]!;
@@ -76,8 +81,10 @@ export function treeTranslations(model: FrameModel, loads: readonly NodalLoad[])
         const M = add(load.M_Nm, cross(sub(xyz(load.node), end), load.F_N));
         const motion = cantileverEnd(sub(end, start), norm(sub(end, start)), { ...el, I_m4: el.Iy_m4 }, load.F_N, M);
         u = add(u, add(motion.u, cross(motion.theta, sub(q.xyz_m, end))));
+        theta = add(theta, motion.theta);
       }
-      result[q.id] = add(result[q.id]!, u);
+      const prev = result[q.id]!;
+      result[q.id] = { u: add(prev.u, u), theta: add(prev.theta, theta) };
     }
   }
   return result;
