@@ -1,0 +1,59 @@
+// Load combinations: the labelled default set, or the user's list.
+import type { CombinationSpec, LoadKind } from '../design/design.ts';
+import { formatNumber } from '../units/units.ts';
+import { COMBINATION_SOURCE } from './defaults.ts';
+import { error, type Problem } from './problem.ts';
+import type { DesignInput } from './schema.ts';
+
+const SYMBOL: Readonly<Record<LoadKind, string>> = { dead: 'D', wind: 'W', ice: 'I', 'ice-wind': 'Wi' };
+
+/** "1.1D + 1.0W" from the factors. */
+export function describeFactors(factors: Partial<Record<LoadKind, number>>): string {
+  return (Object.keys(SYMBOL) as LoadKind[])
+    .filter((k) => factors[k] !== undefined)
+    .map((k) => `${factorText(factors[k] as number)}${SYMBOL[k]}`)
+    .join(' + ')
+    .replace(/\+ -/g, '- ');
+}
+
+/** 1 prints as "1.0", 1.25 as "1.25": the way load factors are written. */
+function factorText(f: number): string {
+  const t = formatNumber(f, 3);
+  return t.includes('.') ? t : `${t}.0`;
+}
+
+function spec(id: string, category: CombinationSpec['category'], what: string, factors: Partial<Record<LoadKind, number>>): CombinationSpec {
+  return { id, category, description: `${what}: ${describeFactors(factors)}`, factors, source: COMBINATION_SOURCE };
+}
+
+export function defaultCombinations(hasIce: boolean, serviceWindFactor: number): CombinationSpec[] {
+  const list = [
+    spec('strength-dead', 'strength', 'Strength, dead load only', { dead: 1.25 }),
+    spec('extreme-wind-max', 'extreme-wind', 'Extreme wind, dead load at its upper factor', { dead: 1.1, wind: 1.0 }),
+    spec('extreme-wind-min', 'extreme-wind', 'Extreme wind, dead load at its lower factor', { dead: 0.9, wind: 1.0 }),
+    spec('service-wind', 'service', 'Service, for deflections', { dead: 1.0, wind: serviceWindFactor }),
+  ];
+  if (hasIce) list.push(spec('extreme-ice', 'extreme-ice', 'Extreme, ice with wind on the iced structure', { dead: 1.1, ice: 1.0, 'ice-wind': 1.0 }));
+  return list;
+}
+
+type CombinationInput = Exclude<NonNullable<DesignInput['combinations']>, 'default'>[number];
+
+export function userCombinations(list: readonly CombinationInput[], hasIce: boolean, problems: Problem[]): CombinationSpec[] {
+  const seen = new Set<string>();
+  return list.map((c, i) => {
+    if (seen.has(c.id)) problems.push(error(['combinations', i, 'id'], `duplicate combination id '${c.id}'; each combination needs its own id`));
+    seen.add(c.id);
+    const factors: Partial<Record<LoadKind, number>> = {};
+    if (c.factors.dead !== undefined) factors.dead = c.factors.dead;
+    if (c.factors.wind !== undefined) factors.wind = c.factors.wind;
+    if (c.factors.ice !== undefined) factors.ice = c.factors.ice;
+    if (c.factors.iceWind !== undefined) factors['ice-wind'] = c.factors.iceWind;
+    if (!hasIce && (factors.ice !== undefined || factors['ice-wind'] !== undefined)) {
+      const key = factors.ice !== undefined ? 'ice' : 'iceWind';
+      problems.push(error(['combinations', i, 'factors', key], 'a factor on ice needs an ice block under loads (loads.ice)'));
+    }
+    if (Object.keys(factors).length === 0) problems.push(error(['combinations', i, 'factors'], 'give at least one factor (dead, wind, ice, iceWind)'));
+    return { id: c.id, category: c.category, description: c.description ?? describeFactors(factors), factors, source: 'input' };
+  });
+}

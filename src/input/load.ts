@@ -1,0 +1,143 @@
+// Reading an input file: YAML (or JSON) text -> schema -> normalised Design, with every
+// problem located at its line and column and reported at once.
+import { createHash } from 'node:crypto';
+import { readFileSync } from 'node:fs';
+import { LineCounter, parseDocument } from 'yaml';
+import type { Design, LoadedDesign } from '../design/design.ts';
+import { InputError, type Diagnostic } from '../errors.ts';
+import type { UnitSystem } from '../units/units.ts';
+import { normalise } from './normalise.ts';
+import { plausibilityWarnings } from './plausibility.ts';
+import { locate } from './positions.ts';
+import { textPath } from './text-path.ts';
+import { formatPath, type Problem } from './problem.ts';
+import { buildInputSchema } from './schema.ts';
+import { issueToProblems } from './zod-issues.ts';
+
+export interface LoadEnv {
+  readonly SOURCE_DATE_EPOCH?: string;
+}
+
+const schemas: Partial<Record<UnitSystem, ReturnType<typeof buildInputSchema>>> = {};
+function schemaFor(system: UnitSystem) {
+  return (schemas[system] ??= buildInputSchema(system));
+}
+
+export function inputHash(bytes: Uint8Array | string): string {
+  return createHash('sha256').update(bytes).digest('hex').slice(0, 12);
+}
+
+/** Reads and validates a design file. Throws InputError with all diagnostics. */
+export function loadDesignFile(file: string): LoadedDesign {
+  let bytes: Buffer;
+  try {
+    bytes = readFileSync(file);
+  } catch (e) {
+    const reason = (e as NodeJS.ErrnoException).code === 'ENOENT' ? 'no such file' : (e as Error).message;
+    throw new InputError([{ file, line: 1, col: 1, path: '', message: `cannot read the input file: ${reason}`, severity: 'error' }]);
+  }
+  return loadFromText(bytes.toString('utf8'), file, inputHash(bytes), { SOURCE_DATE_EPOCH: process.env.SOURCE_DATE_EPOCH });
+}
+
+/** Validates design text as if read from `file`. env defaults to the process environment. */
+export function loadDesignText(text: string, file: string, env?: LoadEnv): LoadedDesign {
+  return loadFromText(text, file, inputHash(Buffer.from(text, 'utf8')), env ?? { SOURCE_DATE_EPOCH: process.env.SOURCE_DATE_EPOCH });
+}
+
+function loadFromText(original: string, file: string, hash: string, env: LoadEnv): LoadedDesign {
+  const text = original.replace(/^\uFEFF/, '');
+  const lines = new LineCounter();
+  const doc = parseDocument(text, { lineCounter: lines, prettyErrors: true, uniqueKeys: true });
+  const toDiagnostic = (p: Problem): Diagnostic => {
+    const pos = locate(doc, lines, p.path, p.at);
+    return { file, line: pos.line, col: pos.col, path: formatPath(p.path), message: p.message, severity: p.severity };
+  };
+
+  const jsonProblem = file.toLowerCase().endsWith('.json') ? strictJsonDiagnostic(text, lines, file) : undefined;
+  if (jsonProblem) throw new InputError([jsonProblem]);
+  if (doc.errors.length > 0) {
+    throw new InputError(uniquePlaces(sortByPlace(doc.errors.map((e) => yamlErrorDiagnostic(e, text, lines, file)))));
+  }
+  const data: unknown = doc.toJS({ maxAliasCount: 100 });
+  const system: UnitSystem = isRecord(data) && data.units === 'si' ? 'si' : 'us';
+  const schema = schemaFor(system);
+  const parsed = schema.safeParse(data);
+  if (!parsed.success) {
+    const problems = parsed.error.issues.flatMap((i) => issueToProblems(i, data, schema));
+    throw new InputError(sortByPlace(dropMissingExplainedByTypo(problems).map(toDiagnostic)));
+  }
+  const { design, problems } = normalise(parsed.data, env);
+  const warnings = design ? plausibilityWarnings(parsed.data, design) : [];
+  const all = [...problems, ...warnings].map(toDiagnostic);
+  const errors = sortByPlace(all.filter((d) => d.severity === 'error'));
+  const warns = sortByPlace(all.filter((d) => d.severity === 'warning'));
+  if (errors.length > 0 || !design) throw new InputError([...errors, ...warns]);
+  return { design: design as Design, file, text: original, inputHash: hash, warnings: warns };
+}
+
+/** A .json file is held to JSON's own rules (no trailing commas, no comments). */
+function strictJsonDiagnostic(text: string, lines: LineCounter, file: string): Diagnostic | undefined {
+  try {
+    JSON.parse(text);
+    return undefined;
+  } catch (e) {
+    const message = (e as Error).message;
+    const at = / at position (\d+)/.exec(message);
+    const offset = at ? Number(at[1]) : 0;
+    const pos = lines.linePos(offset);
+    const what = message.replace(/ in JSON at position \d+.*$/, '').replace(/^Unexpected token (.*), ".*" is not valid JSON$/, 'Unexpected token $1');
+    return { file, line: pos.line, col: pos.col, path: formatPath(textPath(text, offset)), message: `not valid JSON: ${what}`, severity: 'error' };
+  }
+}
+
+/** "unknown key 'load', did you mean 'loads'" already explains "loads is missing": keep one message. */
+function dropMissingExplainedByTypo(problems: readonly Problem[]): Problem[] {
+  const suggested = new Set(
+    problems
+      .filter((p) => p.at === 'key')
+      .map((p) => {
+        const m = /did you mean '([^']+)'/.exec(p.message);
+        return m ? formatPath([...p.path.slice(0, -1), m[1]]) : '';
+      }),
+  );
+  return problems.filter((p) => !(p.message.startsWith('required key is missing') && suggested.has(formatPath(p.path))));
+}
+
+function isRecord(v: unknown): v is Record<string, unknown> {
+  return v !== null && typeof v === 'object' && !Array.isArray(v);
+}
+
+function sortByPlace(ds: Diagnostic[]): Diagnostic[] {
+  return [...ds].sort((a, b) => a.line - b.line || a.col - b.col);
+}
+
+/** Errors whose reported place is the line before the real mistake: the next, over-indented line. */
+const NEXT_LINE_CODES = new Set(['BLOCK_AS_IMPLICIT_KEY', 'MULTILINE_IMPLICIT_KEY']);
+
+function yamlErrorDiagnostic(e: { message: string; pos: [number, number]; code: string }, text: string, lines: LineCounter, file: string): Diagnostic {
+  let offset = e.pos[0];
+  const nextLine = NEXT_LINE_CODES.has(e.code);
+  if (nextLine) {
+    const next = /\n[ \t]*(?=[^ \t\n])/g;
+    next.lastIndex = offset;
+    const m = next.exec(text);
+    if (m) offset = m.index + m[0].length;
+  }
+  const start = lines.linePos(offset);
+  // yaml's message ends with a code excerpt after the first line; keep the first line.
+  const first = e.message.split('\n')[0].replace(/ at line \d+, column \d+:?$/, '');
+  const hint = YAML_HINTS[e.code] ?? '';
+  return { file, line: start.line, col: start.col, path: formatPath(textPath(text, offset, nextLine)), message: `${first}${hint}`, severity: 'error' };
+}
+
+function uniquePlaces(ds: Diagnostic[]): Diagnostic[] {
+  return ds.filter((d, i) => i === 0 || d.line !== ds[i - 1].line || d.col !== ds[i - 1].col);
+}
+
+const YAML_HINTS: Readonly<Record<string, string>> = {
+  DUPLICATE_KEY: '; each key may appear once in a block (remove or rename one)',
+  TAB_AS_INDENT: '; indent with spaces, not tabs',
+  BAD_INDENT: '; check that keys of one block line up',
+  BLOCK_AS_IMPLICIT_KEY: '; this line is indented deeper than its block (check its indentation)',
+  MULTILINE_IMPLICIT_KEY: '; this line is indented deeper than its block, or a comma is missing before it',
+};

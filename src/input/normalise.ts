@@ -1,0 +1,329 @@
+// Validated input (schema output, already in SI) -> the normalised Design, with the
+// checks that the geometry can be built and the assumptions recorded.
+import type {
+  AnalysisSettings, Arm, Attachment, BaseFixity, CombinationSpec, Criteria, Design, FatigueInput, IceInput, Material,
+  Offset, Pole, Project, StructureKind, WindInput,
+} from '../design/design.ts';
+import { DEG_RAD, formatQuantity, type UnitSystem } from '../units/units.ts';
+import { AssumptionLog } from './assumptions.ts';
+import { defaultCombinations, userCombinations } from './combinations.ts';
+import { error, type InputPath, type Problem } from './problem.ts';
+import { packageDate } from './project-date.ts';
+import type { DesignInput, OffsetInput } from './schema.ts';
+import { buildSection } from './section.ts';
+import { closest } from './suggest.ts';
+import { windDirections } from './wind-directions.ts';
+
+export const KIND_TITLES: Readonly<Record<StructureKind, string>> = {
+  'cantilever-sign': 'Cantilevered sign support',
+  'luminaire-pole': 'Luminaire pole',
+  'signal-support': 'Traffic-signal support',
+};
+
+/** Small tolerance so that a panel flush with the tip is not "past the tip" by rounding. */
+const FIT_TOL = 1e-9;
+
+export interface NormaliseResult {
+  readonly design: Design | undefined;
+  readonly problems: readonly Problem[];
+}
+
+export function normalise(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?: string }): NormaliseResult {
+  const problems: Problem[] = [];
+  const log = new AssumptionLog();
+  const system: UnitSystem = input.units;
+  const len = (v: number) => formatQuantity(v, 'length', system);
+
+  const project = buildProject(input, env, problems);
+  const material = buildMaterial(input, log, problems);
+
+  // Pole.
+  const poleIn = input.structure.pole;
+  const poleSection = buildSection(poleIn.section, poleIn.height, ['structure', 'pole', 'section'], system, problems);
+  const base = buildBase(input, log, problems);
+  const pole: Pole | undefined = poleSection ? { height_m: poleIn.height, section: poleSection, base } : undefined;
+
+  // Arms.
+  const arms: Arm[] = [];
+  const armIds = new Set<string>();
+  (input.structure.arms ?? []).forEach((a, i) => {
+    const path: InputPath = ['structure', 'arms', i];
+    if (a.id === 'pole') problems.push(error([...path, 'id'], "'pole' is reserved for attachments on the pole; choose another arm id"));
+    if (armIds.has(a.id)) problems.push(error([...path, 'id'], `duplicate arm id '${a.id}'; each arm needs its own id`));
+    armIds.add(a.id);
+    if (a.attachHeight > poleIn.height * (1 + FIT_TOL)) {
+      problems.push(error([...path, 'attachHeight'], `arm ${a.id} is attached at ${len(a.attachHeight)}, above the pole top at ${len(poleIn.height)}; expected at most the pole height`));
+    }
+    const rise = log.take('armRise', a.rise, { key: `structure.arms[${i}].rise`, label: `Rise angle of arm ${a.id} above horizontal` });
+    if (Math.abs(rise) >= 90 * DEG_RAD) problems.push(error([...path, 'rise'], 'expected a rise angle between -90 and 90 deg'));
+    const section = buildSection(a.section, a.length, [...path, 'section'], system, problems);
+    if (section) arms.push({ id: a.id, attachHeight_m: a.attachHeight, direction_rad: a.direction, length_m: a.length, rise_rad: rise, section });
+  });
+
+  const attachments = buildAttachments(input, arms, system, problems, log);
+  const wind = buildWind(input, arms, attachments, log, problems);
+  const ice = buildIce(input, log);
+  const fatigue = buildFatigue(input, log);
+  const criteria = buildCriteria(input, log, problems);
+  const serviceWindFactor = log.take('serviceWindFactor', input.criteria?.serviceWindFactor);
+  const combinations: CombinationSpec[] =
+    input.combinations === undefined || input.combinations === 'default'
+      ? defaultCombinations(ice !== null, serviceWindFactor)
+      : userCombinations(input.combinations, ice !== null, problems);
+  const analysis = buildAnalysis(input, log);
+
+  if (problems.some((p) => p.severity === 'error') || !pole) return { design: undefined, problems };
+  const design: Design = {
+    formatVersion: 1,
+    units: system,
+    project,
+    kind: input.structure.kind,
+    description: input.structure.description ?? KIND_TITLES[input.structure.kind],
+    material,
+    pole,
+    arms,
+    attachments,
+    wind,
+    ice,
+    fatigue,
+    combinations,
+    criteria,
+    analysis,
+    assumptions: log.list,
+  };
+  return { design, problems };
+}
+
+function buildProject(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?: string }, problems: Problem[]): Project {
+  const p = input.project;
+  const revisions = (p.revisions ?? []).map((r) => ({ id: r.id, date: r.date, description: r.description }));
+  const seen = new Set<string>();
+  revisions.forEach((r, i) => {
+    if (seen.has(r.id)) problems.push(error(['project', 'revisions', i, 'id'], `duplicate revision id '${r.id}'`));
+    seen.add(r.id);
+  });
+  return {
+    name: p.name,
+    structureId: p.structureId,
+    location: p.location ?? '',
+    owner: p.owner ?? '',
+    revisions,
+    preparedBy: p.preparedBy ?? '',
+    checkedBy: p.checkedBy ?? '',
+    engineerOfRecord: p.engineerOfRecord ?? '',
+    date: packageDate(p.date, revisions, env, problems),
+  };
+}
+
+function buildMaterial(input: DesignInput, log: AssumptionLog, problems: Problem[]): Material {
+  const m = input.structure.material ?? {};
+  const E = log.take('materialE', m.E);
+  let G: number;
+  if (m.poissonRatio !== undefined) {
+    if (m.G !== undefined) problems.push(error(['structure', 'material', 'poissonRatio'], 'give G or poissonRatio, not both'));
+    G = E / (2 * (1 + m.poissonRatio));
+    log.note({
+      key: 'structure.material.G',
+      label: 'Shear modulus of steel, G = E / (2 (1 + poissonRatio))',
+      value: G,
+      dim: 'stress',
+      source: `computed from E and the Poisson ratio ${m.poissonRatio} given in the input`,
+      defaulted: false,
+    });
+  } else G = log.take('materialG', m.G);
+  return { E_Pa: E, G_Pa: G, Fy_Pa: log.take('materialFy', m.yieldStrength), density_kgm3: log.take('materialDensity', m.density) };
+}
+
+function buildBase(input: DesignInput, log: AssumptionLog, problems: Problem[]): BaseFixity {
+  const b = input.structure.pole.base;
+  const fixity = log.take('baseFixity', b?.fixity);
+  const path: InputPath = ['structure', 'pole', 'base'];
+  if (fixity === 'rotational-spring') {
+    if (b?.rotationalStiffness === undefined) {
+      problems.push(error([...path, 'rotationalStiffness'], 'required key is missing: a rotational-spring base needs its rotationalStiffness'));
+      return { kind: 'fixed' };
+    }
+    return { kind: 'spring', stiffness_Nm_per_rad: b.rotationalStiffness };
+  }
+  if (b?.rotationalStiffness !== undefined) problems.push(error([...path, 'rotationalStiffness'], 'rotationalStiffness applies only with fixity: rotational-spring'));
+  return { kind: 'fixed' };
+}
+
+interface MemberInfo {
+  readonly kind: 'pole' | 'arm';
+  readonly length_m: number;
+  readonly direction_rad: number;
+}
+
+function findMember(on: string, arms: readonly Arm[], input: DesignInput, path: InputPath, problems: Problem[]): MemberInfo | undefined {
+  if (on === 'pole') return { kind: 'pole', length_m: input.structure.pole.height, direction_rad: 0 };
+  const arm = arms.find((a) => a.id === on);
+  if (arm) return { kind: 'arm', length_m: arm.length_m, direction_rad: arm.direction_rad };
+  const declared = (input.structure.arms ?? []).map((a) => a.id);
+  if (declared.includes(on)) return undefined; // the arm itself has an error, reported there
+  const guess = closest(on, declared);
+  const list = declared.length === 0 ? 'there are no arms' : `arms: ${declared.join(', ')}`;
+  problems.push(error([...path, 'on'], `no arm with id '${on}'; ${guess ? `did you mean '${guess}'? ` : ''}expected an arm id or "pole" (${list})`));
+  return undefined;
+}
+
+function buildOffset(offset: OffsetInput, member: MemberInfo, path: InputPath, problems: Problem[]): { offset: Offset; defaulted: boolean } {
+  const o = offset ?? {};
+  const vertical = o.vertical ?? 0;
+  const lateral = o.lateral ?? 0;
+  if (member.kind === 'arm') {
+    if (o.direction !== undefined) problems.push(error([...path, 'offset', 'direction'], 'offset.direction applies only on the pole; on an arm, lateral is measured square to the arm'));
+    return { offset: { vertical_m: vertical, lateral_m: lateral, direction_rad: member.direction_rad + Math.PI / 2 }, defaulted: offset === undefined };
+  }
+  if (o.vertical !== undefined && o.vertical !== 0) problems.push(error([...path, 'offset', 'vertical'], 'on the pole the height is the position; offset.vertical applies only on arms'));
+  if (lateral !== 0 && o.direction === undefined) problems.push(error([...path, 'offset', 'direction'], 'required key is missing: a lateral offset on the pole needs its plan direction'));
+  return { offset: { vertical_m: 0, lateral_m: lateral, direction_rad: o.direction ?? 0 }, defaulted: offset === undefined };
+}
+
+function buildAttachments(input: DesignInput, arms: readonly Arm[], system: UnitSystem, problems: Problem[], log: AssumptionLog): Attachment[] {
+  const out: Attachment[] = [];
+  const ids = new Set<string>();
+  const onAxis: string[] = [];
+  const len = (v: number) => formatQuantity(v, 'length', system);
+  const claim = (id: string, path: InputPath) => {
+    if (ids.has(id)) problems.push(error([...path, 'id'], `duplicate attachment id '${id}'; panels and point attachments each need their own id`));
+    ids.add(id);
+  };
+  const where = (m: MemberInfo, on: string) => (m.kind === 'pole' ? 'the pole' : `arm ${on}`);
+
+  (input.attachments?.panels ?? []).forEach((p, i) => {
+    const path: InputPath = ['attachments', 'panels', i];
+    claim(p.id, path);
+    const m = findMember(p.on, arms, input, path, problems);
+    if (!m) return;
+    const along = m.kind === 'arm' ? p.width : p.height;
+    const end = m.kind === 'arm' ? 'tip' : 'top';
+    if (p.position > m.length_m * (1 + FIT_TOL)) {
+      problems.push(error([...path, 'position'], `position ${len(p.position)} is beyond the ${end} of ${where(m, p.on)} (${len(m.length_m)})`));
+    } else if (p.position + along / 2 > m.length_m * (1 + FIT_TOL)) {
+      problems.push(error([...path, 'position'], `the panel (centre at ${len(p.position)}, ${m.kind === 'arm' ? 'width' : 'height'} ${len(along)}) reaches past the ${end} of ${where(m, p.on)} at ${len(m.length_m)}`));
+    } else if (p.position - along / 2 < -FIT_TOL * m.length_m) {
+      problems.push(error([...path, 'position'], `the panel (centre at ${len(p.position)}, ${m.kind === 'arm' ? 'width' : 'height'} ${len(along)}) reaches past the ${m.kind === 'arm' ? 'pole face at the arm root' : 'pole base'}`));
+    }
+    let faceNormal = m.direction_rad + Math.PI / 2;
+    if (m.kind === 'arm' && p.faceDirection !== undefined) {
+      problems.push(error([...path, 'faceDirection'], 'faceDirection applies only to panels on the pole; a panel on an arm faces square to the arm'));
+    }
+    if (m.kind === 'pole') {
+      if (p.faceDirection === undefined) problems.push(error([...path, 'faceDirection'], 'required key is missing: a panel on the pole needs the plan direction of its face'));
+      else faceNormal = p.faceDirection;
+    }
+    const { offset, defaulted } = buildOffset(p.offset, m, path, problems);
+    if (defaulted) onAxis.push(p.id);
+    out.push({
+      kind: 'panel', id: p.id, description: p.description ?? `Panel ${p.id}`, member: p.on, position_m: p.position,
+      width_m: p.width, height_m: p.height, weightPerArea_Pa: p.weightPerArea, offset, faceNormal_rad: faceNormal,
+    });
+  });
+
+  (input.attachments?.points ?? []).forEach((p, i) => {
+    const path: InputPath = ['attachments', 'points', i];
+    claim(p.id, path);
+    const m = findMember(p.on, arms, input, path, problems);
+    if (p.windArea !== undefined && p.epa !== undefined) problems.push(error([...path, 'epa'], 'give windArea or epa, not both'));
+    if (p.windArea === undefined && p.epa === undefined) problems.push(error([...path, 'windArea'], 'required key is missing: give windArea (projected area) or epa (effective projected area)'));
+    if (!m) return;
+    if (p.position > m.length_m * (1 + FIT_TOL)) {
+      problems.push(error([...path, 'position'], `position ${len(p.position)} is beyond the ${m.kind === 'arm' ? 'tip' : 'top'} of ${where(m, p.on)} (${len(m.length_m)})`));
+    }
+    const { offset, defaulted } = buildOffset(p.offset, m, path, problems);
+    if (defaulted) onAxis.push(p.id);
+    const typeName = p.type === 'signal-head' ? 'Signal head' : p.type === 'luminaire' ? 'Luminaire' : 'Attachment';
+    out.push({
+      kind: p.type, id: p.id, description: p.description ?? `${typeName} ${p.id}`, member: p.on, position_m: p.position,
+      weight_N: p.weight, windArea_m2: p.windArea ?? p.epa ?? 0, offset,
+    });
+  });
+
+  if (onAxis.length > 0) {
+    log.note({
+      key: 'attachments.*.offset',
+      label: 'Attachments without an offset are taken with their centroid on the member axis',
+      value: onAxis.join(', '),
+      source: 'polebook default: no offset given in the input',
+      defaulted: true,
+    });
+  }
+  return out;
+}
+
+function buildWind(input: DesignInput, arms: readonly Arm[], attachments: readonly Attachment[], log: AssumptionLog, problems: Problem[]): WindInput {
+  const w = input.loads.wind;
+  const path: InputPath = ['loads', 'wind'];
+  const need = (key: 'panels' | 'members' | 'points', needed: boolean): number => {
+    const v = w[key] ?? w.pressure;
+    if (v !== undefined) return v;
+    if (needed) problems.push(error([...path, key], `required key is missing: no design pressure for ${key}; give loads.wind.${key} or loads.wind.pressure`));
+    return 0;
+  };
+  const auto = log.take('windAuto', w.directions?.auto);
+  const directions = windDirections(arms, attachments, auto, w.directions?.add ?? []);
+  if (directions.length === 0) problems.push(error([...path, 'directions'], 'no wind direction to analyse: set auto: true or add angles'));
+  return {
+    membersPressure_Pa: need('members', true),
+    panelsPressure_Pa: need('panels', attachments.some((a) => a.kind === 'panel')),
+    pointsPressure_Pa: need('points', attachments.some((a) => a.kind !== 'panel')),
+    directions,
+  };
+}
+
+function buildIce(input: DesignInput, log: AssumptionLog): IceInput | null {
+  const ice = input.loads.ice;
+  if (!ice) return null;
+  return { weightPerArea_Pa: log.take('iceWeight', ice.weightPerArea), windFactor: ice.windFactor };
+}
+
+function buildFatigue(input: DesignInput, log: AssumptionLog): FatigueInput | null {
+  const f = input.loads.fatigue;
+  if (!f) return null;
+  const imp = (k: 'galloping' | 'naturalGust' | 'truckGust') =>
+    log.take('fatigueImportance', f.importance?.[k], { key: `loads.fatigue.importance.${k}`, label: `Fatigue importance factor, ${k}` });
+  return {
+    gallopingPressure_Pa: f.galloping ?? null,
+    naturalGustPressure_Pa: f.naturalGust ?? null,
+    truckGustPressure_Pa: f.truckGust ?? null,
+    importance: { galloping: imp('galloping'), naturalGust: imp('naturalGust'), truckGust: imp('truckGust') },
+    poleBaseThreshold_Pa: f.poleBaseThreshold,
+    armRootThreshold_Pa: f.armRootThreshold,
+  };
+}
+
+function buildCriteria(input: DesignInput, log: AssumptionLog, problems: Problem[]): Criteria {
+  const c = input.criteria ?? {};
+  const r = c.resistanceFactors ?? {};
+  const bolts = c.anchorBolts;
+  if (bolts && bolts.boltDiameter >= bolts.circleDiameter) {
+    problems.push(error(['criteria', 'anchorBolts', 'boltDiameter'], 'the bolt diameter is at or over the bolt circle diameter; expected a bolt much smaller than the circle'));
+  }
+  return {
+    armTipDeflectionRatio: log.take('armTipDeflection', c.armTipDeflectionLimit),
+    poleTopDeflectionRatio: log.take('poleTopDeflection', c.poleTopDeflectionLimit),
+    phi: {
+      flexure: log.take('phiFlexure', r.flexure),
+      shear: log.take('phiShear', r.shear),
+      torsion: log.take('phiTorsion', r.torsion),
+      axial: log.take('phiAxial', r.axial),
+      boltTension: log.take('phiBoltTension', r.boltTension),
+      boltShear: log.take('phiBoltShear', r.boltShear),
+    },
+    anchorBolts: bolts
+      ? { count: bolts.count, circleDiameter_m: bolts.circleDiameter, boltDiameter_m: bolts.boltDiameter, tensileStrength_Pa: bolts.tensileStrength }
+      : null,
+  };
+}
+
+function buildAnalysis(input: DesignInput, log: AssumptionLog): AnalysisSettings {
+  const a = input.analysis ?? {};
+  return {
+    segmentsPerMember: log.take('segments', a.segmentsPerMember),
+    secondOrder: log.take('secondOrder', a.secondOrder),
+    pDeltaTolerance: log.take('pDeltaTolerance', a.pDeltaTolerance),
+    pDeltaMaxIterations: log.take('pDeltaMaxIterations', a.pDeltaMaxIterations),
+    stationSpacing_m: log.take('stationSpacing', a.stationSpacing),
+  };
+}

@@ -1,0 +1,67 @@
+// Warnings for magnitudes that can be built but look like a slip: a wind speed typed as a
+// pressure, a pole taller than polebook is meant for, a panel's whole weight typed as its
+// weight per area. The ranges are ours (common practice), stated in each message.
+import type { Design } from '../design/design.ts';
+import { FT_M, PSF_PA, formatNumber, formatQuantity } from '../units/units.ts';
+import { warning, type InputPath, type Problem } from './problem.ts';
+import type { DesignInput } from './schema.ts';
+
+/** polebook's scope: poles up to 60 ft (our limit, not a code limit). */
+export const POLE_HEIGHT_SCOPE_M = 60 * FT_M;
+/** Arms longer than 75 ft are beyond the usual range of mast arms (common practice). */
+export const ARM_LENGTH_USUAL_M = 75 * FT_M;
+/** Sign panels with their bracing weigh a few psf; above this it reads like a whole weight (common practice). */
+export const PANEL_WEIGHT_SUSPECT_PA = 25 * PSF_PA;
+
+/** A design pressure whose number, in the units the user typed, falls where basic wind speeds do. */
+function pressureSlip(p_Pa: number, design: Design): string | undefined {
+  if (design.units === 'us') {
+    const psf = p_Pa / PSF_PA;
+    if (psf >= 85 && psf <= 200) {
+      return `${formatNumber(psf, 4)} psf looks like a basic wind speed in mph (about 90-180 mph) typed in a pressure field; design pressures are typically tens of psf. Check the value`;
+    }
+    if (psf > 200) return `${formatNumber(psf, 4)} psf is far above typical design wind pressures (tens of psf); check the value and its unit`;
+    if (psf > 0 && psf < 3) return `${formatNumber(psf, 3)} psf is very low for a design wind pressure; was it typed in kPa? (1 kPa = 20.9 psf)`;
+    return undefined;
+  }
+  const kPa = p_Pa / 1000;
+  if (kPa >= 35 && kPa <= 90) {
+    return `${formatNumber(kPa, 4)} kPa looks like a basic wind speed in m/s (about 40-80 m/s) typed in a pressure field; design pressures are typically 0.5-3 kPa. Check the value`;
+  }
+  if (kPa > 10) return `${formatNumber(kPa, 4)} kPa is far above typical design wind pressures (0.5-3 kPa); was it typed in Pa? Check the value and its unit`;
+  return undefined;
+}
+
+export function plausibilityWarnings(input: DesignInput, design: Design): Problem[] {
+  const out: Problem[] = [];
+  const wind = input.loads.wind;
+  for (const key of ['pressure', 'panels', 'members', 'points'] as const) {
+    const p = wind[key];
+    if (p === undefined) continue;
+    const slip = pressureSlip(p, design);
+    if (slip) out.push(warning(['loads', 'wind', key], slip));
+  }
+  if (design.pole.height_m > POLE_HEIGHT_SCOPE_M * (1 + 1e-9)) {
+    out.push(
+      warning(['structure', 'pole', 'height'], `a pole of ${formatQuantity(design.pole.height_m, 'length', design.units)} is taller than polebook's scope of 60 ft (18.3 m), a limit of ours; high-mast poles need checks polebook does not make. Check the value and its unit`),
+    );
+  }
+  design.arms.forEach((a, i) => {
+    if (a.length_m > ARM_LENGTH_USUAL_M * (1 + 1e-9)) {
+      out.push(warning(['structure', 'arms', i, 'length'], `arm ${a.id} is ${formatQuantity(a.length_m, 'length', design.units)} long, beyond the usual 75 ft (22.9 m) of mast arms (our limit); check the value and its unit`));
+    }
+  });
+  (input.attachments?.panels ?? []).forEach((p, i) => {
+    if (p.weightPerArea > PANEL_WEIGHT_SUSPECT_PA) {
+      const path: InputPath = ['attachments', 'panels', i, 'weightPerArea'];
+      out.push(
+        warning(path, `${formatQuantity(p.weightPerArea, 'pressure', design.units)} per panel area is far above the few psf (0.1-0.4 kPa) of sign panels with bracing; it reads like the panel's whole weight. Give weight per area = weight / (width x height)`),
+      );
+    }
+  });
+  const bolts = design.criteria.anchorBolts;
+  if (bolts && bolts.circleDiameter_m <= design.pole.section.rootDiameter_m) {
+    out.push(warning(['criteria', 'anchorBolts', 'circleDiameter'], 'the bolt circle is not larger than the pole base; anchor bolts normally sit outside the tube. Check the value and its unit'));
+  }
+  return out;
+}

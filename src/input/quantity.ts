@@ -1,0 +1,102 @@
+// Zod schemas for quantities as typed in the input: a bare number in the unit system's
+// default unit, or a string with its unit ("28 ft", "3.5 psf"). The output is SI.
+import { z } from 'zod';
+import { SYSTEM_UNIT, UNITS, parseQuantity, unitSymbols, type Dim, type UnitSystem } from '../units/units.ts';
+
+export const DIM_NAMES: Readonly<Record<Dim, string>> = {
+  length: 'length',
+  section: 'length',
+  area: 'area',
+  force: 'force',
+  weight: 'weight (force)',
+  moment: 'moment',
+  pressure: 'pressure',
+  stress: 'stress',
+  density: 'density',
+  lineLoad: 'load per length',
+  rotStiffness: 'rotational stiffness',
+  angle: 'angle',
+  taper: 'taper (diameter change per length)',
+  speed: 'speed',
+  frequency: 'frequency',
+  sectionArea: 'area',
+  inertia: 'second moment of area',
+  modulus: 'section modulus',
+  mass: 'mass',
+  ratio: 'ratio',
+};
+
+export type Bound = 'positive' | 'nonNegative' | 'any';
+
+const uniq = (xs: string[]): string[] => [...new Set(xs)];
+
+/** Explains a quantity that could not be read, for the diagnostic. */
+export function quantityProblem(raw: number | string, dim: Dim, system: UnitSystem): string | undefined {
+  const r = parseQuantity(raw, dim, system);
+  if (r.ok) return undefined;
+  const expected = uniq(unitSymbols(dim)).join(', ');
+  const name = DIM_NAMES[dim];
+  if (r.reason === 'syntax') {
+    return `cannot read '${String(raw)}' as a ${name}; expected a number (in ${SYSTEM_UNIT[system][dim]}) or a number with a unit, e.g. "${example(dim, system)}"`;
+  }
+  if (r.reason === 'dimension') {
+    const of = uniq((r.dimOf ?? []).map((d) => DIM_NAMES[d])).join(' or ');
+    return `'${r.unit}' is a unit of ${of}, but a ${name} is expected here; expected one of: ${expected}`;
+  }
+  const sameLetters = UNITS.find((d) => d.dim === dim && d.symbol.toLowerCase() === (r.unit ?? '').toLowerCase());
+  const hint = sameLetters ? `did you mean '${sameLetters.symbol}'? ` : '';
+  return `unknown unit '${r.unit}'; ${hint}expected a ${name} unit: ${expected}`;
+}
+
+function example(dim: Dim, system: UnitSystem): string {
+  const unit = SYSTEM_UNIT[system][dim];
+  return unit === '' ? '1.5' : `12.5 ${unit}`;
+}
+
+function boundText(bound: Bound): string {
+  return bound === 'positive' ? 'greater than 0' : 'at least 0';
+}
+
+/** What the JSON Schema says about a quantity key. */
+export function quantityDescription(dim: Dim, text: string): string {
+  const us = SYSTEM_UNIT.us[dim];
+  const si = SYSTEM_UNIT.si[dim];
+  const units = us === si ? (us === '' ? 'a number' : `a number in ${us}`) : `a number in ${us} (units: us) or ${si} (units: si)`;
+  return `${text}. ${DIM_NAMES[dim][0].toUpperCase()}${DIM_NAMES[dim].slice(1)}: ${units}, or a string with a unit, e.g. "${example(dim, 'us')}"`;
+}
+
+/** A quantity key: number | "number unit" in, SI number out. */
+export function quantity(dim: Dim, system: UnitSystem, bound: Bound, text: string) {
+  return z
+    .union([z.number(), z.string()])
+    .transform((raw, ctx) => {
+      const problem = quantityProblem(raw, dim, system);
+      if (problem !== undefined) {
+        ctx.addIssue({ code: 'custom', message: problem });
+        return z.NEVER;
+      }
+      const r = parseQuantity(raw, dim, system);
+      const si = r.ok ? r.si : NaN;
+      if ((bound === 'positive' && !(si > 0)) || (bound === 'nonNegative' && !(si >= 0))) {
+        ctx.addIssue({ code: 'custom', message: `must be ${boundText(bound)}, got ${String(raw)}` });
+        return z.NEVER;
+      }
+      return si;
+    })
+    .meta({ description: quantityDescription(dim, text) });
+}
+
+/** A plain number (factor, ratio, count) with bounds. */
+export function factor(text: string, min: number, max: number, minInclusive = true) {
+  const base = z.number({ error: (iss) => (iss.input === undefined ? undefined : `expected a number, got ${describeValue(iss.input)}`) });
+  const bounded = minInclusive ? base.min(min, { error: `must be at least ${min}` }) : base.gt(min, { error: `must be greater than ${min}` });
+  return bounded.max(max, { error: `must be at most ${max}` }).meta({ description: text });
+}
+
+export function describeValue(v: unknown): string {
+  if (v === null) return 'nothing (null)';
+  if (Array.isArray(v)) return 'a list';
+  if (typeof v === 'object') return 'a block of keys';
+  if (typeof v === 'string') return `the text '${v.length > 40 ? `${v.slice(0, 40)}...` : v}'`;
+  return `${typeof v} ${String(v)}`;
+}

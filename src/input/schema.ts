@@ -1,0 +1,271 @@
+// The input file format, as a zod schema: the single source of truth for the keys, their
+// types, the defaults (noted in descriptions, taken from defaults.ts) and the JSON Schema
+// that `polebook schema` prints. Quantities are read in the file's unit system, so the
+// schema is built per system; both give the same JSON Schema.
+import { z } from 'zod';
+import type { UnitSystem } from '../units/units.ts';
+import { defaultNote } from './defaults.ts';
+import { factor, quantity } from './quantity.ts';
+
+export const INPUT_FORMAT_VERSION = 1;
+export const STRUCTURE_KIND_VALUES = ['cantilever-sign', 'luminaire-pole', 'signal-support'] as const;
+
+const text = (description: string) =>
+  z
+    .union([z.string(), z.number()])
+    .transform((v) => String(v))
+    .meta({ description });
+
+const id = (description: string) =>
+  z
+    .union([z.string().min(1, { error: 'must not be empty' }), z.number()])
+    .transform((v) => String(v))
+    .meta({ description });
+
+const isoDate = (description: string) =>
+  z
+    .string({ error: (iss) => (iss.input === undefined ? undefined : 'expected a date as yyyy-mm-dd, e.g. 2026-03-15 (quote it if your editor changes it)') })
+    .regex(/^\d{4}-\d{2}-\d{2}$/, { error: 'expected a date as yyyy-mm-dd, e.g. 2026-03-15' })
+    .refine((s) => {
+      const d = new Date(`${s}T00:00:00Z`);
+      return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s;
+    }, { error: 'not a calendar date; expected yyyy-mm-dd' })
+    .meta({ description });
+
+/** A deflection limit: "L/100", "1/100" or a fraction such as 0.01. */
+const deflectionLimit = (description: string) =>
+  z
+    .union([z.number(), z.string()])
+    .transform((raw, ctx) => {
+      const m = typeof raw === 'string' ? /^\s*(?:L|1)\s*\/\s*(\d+(?:\.\d+)?)\s*$/.exec(raw) : null;
+      const value = typeof raw === 'number' ? raw : m ? 1 / Number(m[1]) : NaN;
+      if (!(value > 0 && value < 1)) {
+        ctx.addIssue({ code: 'custom', message: `expected a limit such as "L/100" or a fraction between 0 and 1, got ${JSON.stringify(raw)}` });
+        return z.NEVER;
+      }
+      return value;
+    })
+    .meta({ description });
+
+function sectionSchema(system: UnitSystem) {
+  const common = {
+    taper: quantity('taper', system, 'any', 'Taper rate: decrease of the diameter per length from root to tip (give it with one end diameter)').optional(),
+    wall: quantity('section', system, 'positive', 'Wall thickness'),
+  };
+  const round = z.strictObject({
+    shape: z.literal('round'),
+    rootDiameter: quantity('section', system, 'positive', 'Outside diameter at the root end (pole base, or the arm end at the pole)').optional(),
+    tipDiameter: quantity('section', system, 'positive', 'Outside diameter at the tip end (pole top, arm tip)').optional(),
+    ...common,
+  });
+  const multisided = z.strictObject({
+    shape: z.literal('multisided'),
+    sides: z.literal([8, 12, 16], { error: (iss) => `expected 8, 12 or 16 sides, got ${JSON.stringify(iss.input)}` }).meta({ description: 'Number of flat sides' }),
+    rootAcrossFlats: quantity('section', system, 'positive', 'Outside diameter across the flats at the root end').optional(),
+    tipAcrossFlats: quantity('section', system, 'positive', 'Outside diameter across the flats at the tip end').optional(),
+    ...common,
+  });
+  return z
+    .discriminatedUnion('shape', [round, multisided])
+    .meta({ description: 'Tapered steel tube: give two of (root size, tip size, taper) and the wall. A multisided tube is dimensioned across the flats.' });
+}
+
+function offsetSchema(system: UnitSystem) {
+  return z
+    .strictObject({
+      vertical: quantity('length', system, 'any', 'On an arm: offset of the centroid above (+) or below (-) the arm axis').optional(),
+      lateral: quantity('length', system, 'any', 'On an arm: horizontal offset perpendicular to the arm, + to the left looking from root to tip. On the pole: distance from the pole axis').optional(),
+      direction: quantity('angle', system, 'any', 'On the pole only: plan direction of the lateral offset (deg from +X toward +Y)').optional(),
+    })
+    .meta({ description: 'Offset of the centroid from the member axis. Default: on the axis' });
+}
+
+function armSchema(system: UnitSystem) {
+  return z.strictObject({
+    id: id('Arm id, referred to by attachments (e.g. A1)'),
+    attachHeight: quantity('length', system, 'positive', 'Height of the arm axis where it meets the pole, above the pole base'),
+    direction: quantity('angle', system, 'any', 'Plan direction of the arm from the pole (deg from +X toward +Y)'),
+    length: quantity('length', system, 'positive', 'Length along the arm axis from the pole face to the tip'),
+    rise: quantity('angle', system, 'any', `Rise angle of the arm above horizontal. ${defaultNote('armRise')}`).optional(),
+    section: sectionSchema(system),
+  });
+}
+
+function panelSchema(system: UnitSystem) {
+  return z.strictObject({
+    id: id('Panel id (e.g. S1)'),
+    description: text('What the panel is, for the package').optional(),
+    on: id('Member carrying the panel: an arm id, or "pole"'),
+    position: quantity('length', system, 'nonNegative', 'Centre of the panel: on an arm, distance along the arm from the pole face; on the pole, height above the base'),
+    width: quantity('length', system, 'positive', 'Panel width (horizontal, along an arm)'),
+    height: quantity('length', system, 'positive', 'Panel height'),
+    weightPerArea: quantity('pressure', system, 'nonNegative', 'Weight of the panel and its bracing per panel area (psf | kPa)'),
+    offset: offsetSchema(system).optional(),
+    faceDirection: quantity('angle', system, 'any', 'On the pole only: plan direction of the panel face normal (a panel on an arm faces perpendicular to the arm)').optional(),
+  });
+}
+
+function pointSchema(system: UnitSystem) {
+  return z.strictObject({
+    id: id('Attachment id (e.g. L1, H1)'),
+    type: z.enum(['luminaire', 'signal-head', 'other']).meta({ description: 'luminaire | signal-head | other' }),
+    description: text('What it is, for the package').optional(),
+    on: id('Member carrying it: an arm id, or "pole"'),
+    position: quantity('length', system, 'nonNegative', 'On an arm: distance along the arm from the pole face; on the pole: height above the base'),
+    weight: quantity('weight', system, 'nonNegative', 'Weight (lb | N)'),
+    windArea: quantity('area', system, 'nonNegative', 'Projected wind area (give this or epa)').optional(),
+    epa: quantity('area', system, 'nonNegative', "Effective projected area from the maker's data (give this or windArea)").optional(),
+    offset: offsetSchema(system).optional(),
+  });
+}
+
+function windSchema(system: UnitSystem) {
+  const p = (what: string) => quantity('pressure', system, 'nonNegative', `Design wind pressure on ${what} (the coefficients you chose already applied)`).optional();
+  return z.strictObject({
+    pressure: p('every class not given separately'),
+    panels: p('sign panels'),
+    members: p('the pole and arms (on the projected tube diameter)'),
+    points: p('point attachments (on their wind area or EPA)'),
+    directions: z
+      .strictObject({
+        auto: z.boolean().optional().meta({ description: `Find directions from the geometry. ${defaultNote('windAuto')}` }),
+        add: z.array(quantity('angle', system, 'any', 'Plan direction the wind blows toward (deg from +X toward +Y)')).optional(),
+      })
+      .optional(),
+  });
+}
+
+function iceSchema(system: UnitSystem) {
+  return z.strictObject({
+    weightPerArea: quantity('pressure', system, 'positive', `Ice weight per surface area. ${defaultNote('iceWeight')}`).optional(),
+    windFactor: factor('Factor on the design wind pressures acting together with ice (no default: it depends on the governing code)', 0, 1),
+  });
+}
+
+function fatigueSchema(system: UnitSystem) {
+  const p = (what: string) => quantity('pressure', system, 'nonNegative', `Equivalent static pressure, ${what}`).optional();
+  const importance = (what: string) => factor(`Importance factor, ${what}. ${defaultNote('fatigueImportance')}`, 0, 2).optional();
+  return z.strictObject({
+    galloping: p('galloping (vertical, on attachment area)'),
+    naturalGust: p('natural wind gust'),
+    truckGust: p('truck-induced gust'),
+    importance: z
+      .strictObject({ galloping: importance('galloping'), naturalGust: importance('natural wind gust'), truckGust: importance('truck-induced gust') })
+      .optional(),
+    poleBaseThreshold: quantity('stress', system, 'positive', 'Constant-amplitude fatigue threshold of the pole base detail'),
+    armRootThreshold: quantity('stress', system, 'positive', 'Constant-amplitude fatigue threshold of the arm root detail'),
+  });
+}
+
+function combinationSchema() {
+  const f = (kind: string) => factor(`Load factor on ${kind}`, -5, 5).optional();
+  return z.strictObject({
+    id: id('Combination id'),
+    category: z.enum(['strength', 'extreme-wind', 'extreme-ice', 'service', 'fatigue']),
+    description: text('What the combination is').optional(),
+    factors: z.strictObject({ dead: f('dead load'), wind: f('wind'), ice: f('ice weight'), iceWind: f('wind with ice') }),
+  });
+}
+
+function criteriaSchema(system: UnitSystem) {
+  const phi = (name: 'phiFlexure' | 'phiShear' | 'phiTorsion' | 'phiAxial' | 'phiBoltTension' | 'phiBoltShear', what: string) =>
+    factor(`Resistance factor, ${what}. ${defaultNote(name)}`, 0, 1, false).optional();
+  return z.strictObject({
+    armTipDeflectionLimit: deflectionLimit(`Service deflection limit of arm tips, "L/n" or a fraction. ${defaultNote('armTipDeflection')}`).optional(),
+    poleTopDeflectionLimit: deflectionLimit(`Service deflection limit of the pole top, "L/n" or a fraction. ${defaultNote('poleTopDeflection')}`).optional(),
+    serviceWindFactor: factor(`Factor on wind in the service combination. ${defaultNote('serviceWindFactor')}`, 0, 2, false).optional(),
+    resistanceFactors: z
+      .strictObject({
+        flexure: phi('phiFlexure', 'flexure'),
+        shear: phi('phiShear', 'shear'),
+        torsion: phi('phiTorsion', 'torsion'),
+        axial: phi('phiAxial', 'axial compression'),
+        boltTension: phi('phiBoltTension', 'anchor bolt tension'),
+        boltShear: phi('phiBoltShear', 'anchor bolt shear'),
+      })
+      .optional(),
+    anchorBolts: z
+      .strictObject({
+        count: z.int({ error: 'expected a whole number of bolts' }).min(3, { error: 'at least 3 anchor bolts are needed' }).max(64, { error: 'at most 64 anchor bolts' }),
+        circleDiameter: quantity('section', system, 'positive', 'Diameter of the bolt circle'),
+        boltDiameter: quantity('section', system, 'positive', 'Nominal bolt diameter'),
+        tensileStrength: quantity('stress', system, 'positive', 'Specified minimum tensile strength of the bolt steel'),
+      })
+      .optional(),
+  });
+}
+
+function analysisSchema(system: UnitSystem) {
+  return z.strictObject({
+    segmentsPerMember: z.int({ error: 'expected a whole number' }).min(1, { error: 'at least 1' }).max(200, { error: 'at most 200' }).optional().meta({ description: defaultNote('segments') }),
+    secondOrder: z.boolean().optional().meta({ description: `true: P-delta analysis. ${defaultNote('secondOrder')}` }),
+    pDeltaTolerance: factor(`Relative change of displacements that ends the P-delta iteration. ${defaultNote('pDeltaTolerance')}`, 0, 0.01, false).optional(),
+    pDeltaMaxIterations: z.int({ error: 'expected a whole number' }).min(1, { error: 'at least 1' }).max(1000, { error: 'at most 1000' }).optional().meta({ description: defaultNote('pDeltaMaxIterations') }),
+    stationSpacing: quantity('length', system, 'positive', `Regular spacing of result stations. ${defaultNote('stationSpacing')}`).optional(),
+  });
+}
+
+export function buildInputSchema(system: UnitSystem) {
+  return z
+    .strictObject({
+      formatVersion: z.literal(INPUT_FORMAT_VERSION, { error: `expected formatVersion: ${INPUT_FORMAT_VERSION} (the only input format so far)` }),
+      units: z.enum(['us', 'si'], { error: "expected 'us' (ft, in, kip, lb, psf, ksi, pcf) or 'si' (m, mm, kN, N, kPa, MPa, kg/m3)" }),
+      project: z.strictObject({
+        name: text('Project name'),
+        structureId: id('Structure id, printed on every page'),
+        location: text('Location (road, crossing, station)').optional(),
+        owner: text('Owner or client').optional(),
+        revisions: z.array(z.strictObject({ id: id('Revision id, e.g. A or 0'), date: isoDate('Revision date, yyyy-mm-dd'), description: text('What changed') })).optional(),
+        preparedBy: text('Prepared by').optional(),
+        checkedBy: text('Checked by').optional(),
+        engineerOfRecord: text('Engineer of record').optional(),
+        date: isoDate('Date of the package, yyyy-mm-dd. Default: SOURCE_DATE_EPOCH, else the newest revision date').optional(),
+      }),
+      structure: z.strictObject({
+        kind: z.enum(STRUCTURE_KIND_VALUES).meta({ description: 'cantilever-sign | luminaire-pole | signal-support (sets defaults only)' }),
+        description: text('One line describing the structure').optional(),
+        material: z
+          .strictObject({
+            E: quantity('stress', system, 'positive', `Modulus of elasticity. ${defaultNote('materialE')}`).optional(),
+            G: quantity('stress', system, 'positive', `Shear modulus (or give poissonRatio). ${defaultNote('materialG')}`).optional(),
+            poissonRatio: factor('Poisson ratio; G = E / (2 (1 + poissonRatio))', 0, 0.5, false).optional(),
+            yieldStrength: quantity('stress', system, 'positive', `Minimum yield strength. ${defaultNote('materialFy')}`).optional(),
+            density: quantity('density', system, 'positive', `Density. ${defaultNote('materialDensity')}`).optional(),
+          })
+          .optional(),
+        pole: z.strictObject({
+          height: quantity('length', system, 'positive', 'Pole height above the base plate'),
+          section: sectionSchema(system),
+          base: z
+            .strictObject({
+              fixity: z.enum(['fixed', 'rotational-spring']).meta({ description: `fixed | rotational-spring. ${defaultNote('baseFixity')}` }),
+              rotationalStiffness: quantity('rotStiffness', system, 'positive', 'Rotational stiffness of the base, for rotational-spring').optional(),
+            })
+            .optional(),
+        }),
+        arms: z.array(armSchema(system)).optional(),
+      }),
+      attachments: z
+        .strictObject({
+          panels: z.array(panelSchema(system)).optional(),
+          points: z.array(pointSchema(system)).optional(),
+        })
+        .optional(),
+      loads: z.strictObject({
+        wind: windSchema(system),
+        ice: iceSchema(system).optional(),
+        fatigue: fatigueSchema(system).optional(),
+      }),
+      combinations: z
+        .union([z.literal('default'), z.array(combinationSchema()).min(1, { error: 'give at least one combination, or write default' })])
+        .optional()
+        .meta({ description: "'default' (the default set, labelled in the package) or a list of combinations with their factors" }),
+      criteria: criteriaSchema(system).optional(),
+      analysis: analysisSchema(system).optional(),
+    })
+    .meta({ title: 'polebook input', description: 'Input file of polebook: one pole with its arms, attachments, loads and criteria' });
+}
+
+export type DesignInput = z.output<ReturnType<typeof buildInputSchema>>;
+export type SectionInput = DesignInput['structure']['pole']['section'];
+export type OffsetInput = NonNullable<NonNullable<DesignInput['attachments']>['panels']>[number]['offset'];
