@@ -9,6 +9,8 @@
 // - Rigid offsets become short beams with the same tube and a 1e4 times stiffer material,
 //   checked on offset cantilevers in closed form. (*RIGID BODY on beam nodes was tried and
 //   stopped ccx 2.20 with "*ERROR in cascade", so it is not offered.)
+// - Nodal moments become force couples on stiff stubs; rotations are read from load-free probe
+//   stubs (both explained where they are written below).
 // Frame node k is ccx node k + 1; generated nodes follow the frame nodes.
 import type { FrameElement, FrameModel, Vec3 } from '../../../src/model/frame.ts';
 import type { NodalLoad } from '../../../src/loads/load-types.ts';
