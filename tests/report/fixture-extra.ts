@@ -41,6 +41,7 @@ export function demoStepsSection(): DocSection {
   <text x="200" y="55" font-family="DejaVuSans" font-size="10">P = 2 kN</text>
   <text x="120" y="14" font-family="DejaVuSans" font-size="10">a = 3 m</text>
   <text x="46" y="80" font-family="DejaVuSans" font-size="10">σ ≤ φ·Fy</text>
+  <text x="46" y="100" font-family="DejaVuSans" font-size="10">M<tspan font-size="7" dy="2">root</tspan><tspan dy="-2">=6 kN·m</tspan></text>
 </svg>`;
   return {
     id: 'demo-steps',

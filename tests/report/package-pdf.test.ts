@@ -139,6 +139,12 @@ describe('symbols survive (embedded DejaVu)', () => {
     expect(squeeze(all)).toContain(squeeze('σ ≤ φ·Fy'));
   });
 
+  it('SVG text with a <tspan> prints without a space pdfmake would add ("Mroot", not "M root")', () => {
+    const all = si.pages.join('\n');
+    expect(all).toContain('Mroot=6 kN·m');
+    expect(all).not.toContain('M root');
+  });
+
   it('pdffonts lists DejaVu Sans and DejaVu Sans Mono, every font embedded', () => {
     const rows = si.fonts.split('\n').slice(2).filter((l) => l.trim() !== '');
     expect(rows.some((r) => /\+DejaVuSans\s/.test(r))).toBe(true);
