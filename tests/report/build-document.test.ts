@@ -39,7 +39,7 @@ describe('buildDocument', () => {
       status: 'DRAFT FOR REVIEW',
       date: '2026-03-15',
       inputHash: FIXTURE_HASH,
-      inputFile: 'examples/quarry-mill-qm-cs-07.yaml',
+      inputFile: 'quarry-mill-qm-cs-07.yaml',
       units: 'si',
     });
   });
@@ -66,7 +66,7 @@ describe('buildDocument', () => {
       expect(row[3]).toBe(a.source);
     });
     // 345e6 Pa = 345 MPa; 144 Pa = 0.144 kPa (SI display units of units.ts).
-    expect(table.rows.map((r) => r[1])).toEqual(expect.arrayContaining(['345 MPa', '0.144 kPa', 'fixed', 'yes', '0.9']));
+    expect(table.rows.map((r) => r[1])).toEqual(expect.arrayContaining(['345 MPa', '0.144 kPa', 'fixed', 'yes', '0.9', '0.01 (1/100)']));
   });
 
   it('echoes the input text verbatim in a code block', () => {

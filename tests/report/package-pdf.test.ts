@@ -2,7 +2,7 @@
 import { execFileSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { join } from 'node:path';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
 import type { DocumentModel } from '../../src/report/document.ts';
 import { renderPdf } from '../../src/report/pdf/render-pdf.ts';
 import { buildDocument } from '../../src/report/sections/build-document.ts';
@@ -52,7 +52,7 @@ describe('cover', () => {
     const cover = get().pages[0];
     // Letter-spaced, so pdftotext reads it with gaps.
     expect(squeeze(cover)).toContain('CALCULATIONPACKAGE');
-    for (const s of ['Cantilevered sign support', 'Quarry Mill Road widening', 'Larkspur Valley Transportation Authority', 'DRAFT FOR REVIEW', 'A, dated 2026-03-15', 'examples/quarry-mill-qm-cs-07.yaml', 'polebook 0.1.0']) {
+    for (const s of ['Cantilevered sign support', 'Quarry Mill Road widening', 'Larkspur Valley Transportation Authority', 'DRAFT FOR REVIEW', 'A, dated 2026-03-15', 'quarry-mill-qm-cs-07.yaml', 'polebook 0.1.0']) {
       expect(cover).toContain(s);
     }
     expect(cover).toContain('Caution: draft for review, not for construction');
@@ -180,6 +180,22 @@ describe('metadata and determinism', () => {
   it('two renders in this process give the same bytes', async () => {
     const again = await renderPdf(buildDocument(FIXTURE_LOADED, { sections: [demoStepsSection()] }));
     expect(Buffer.compare(again, siPdf)).toBe(0);
+  });
+
+  it('the folder the input was read from does not change the bytes (only the file name is printed)', async () => {
+    const moved = { ...FIXTURE_LOADED, file: '/some/other/checkout/examples/quarry-mill-qm-cs-07.yaml' };
+    const pdf = await renderPdf(buildDocument(moved, { sections: [demoStepsSection()] }));
+    expect(Buffer.compare(pdf, siPdf)).toBe(0);
+  });
+
+  it('pdfmake prints no access-policy warnings', async () => {
+    const warn = vi.spyOn(console, 'warn');
+    try {
+      await renderPdf(buildDocument(FIXTURE_LOADED));
+      expect(warn).not.toHaveBeenCalled();
+    } finally {
+      warn.mockRestore();
+    }
   });
 
   it('a render under TZ=Pacific/Auckland and another locale gives the same bytes', () => {

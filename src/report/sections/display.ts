@@ -58,6 +58,15 @@ export function offsetText(a: Attachment, d: Display): string {
 export function assumptionValue(a: Assumption, d: Display): string {
   if (typeof a.value === 'boolean') return a.value ? 'yes' : 'no';
   if (typeof a.value === 'string') return a.value;
+  if (a.dim === 'ratio') return ratioText(a.value);
   if (a.dim !== undefined) return d.q(a.value, a.dim);
   return formatNumber(a.value, 6);
+}
+
+/** A dimensionless fraction; a limit such as 0.01 also shows as 1/100, the way it is usually given. */
+export function ratioText(v: number): string {
+  const text = formatNumber(v, 6);
+  if (!(v > 0 && v < 1)) return text;
+  const inverse = 1 / v;
+  return Math.abs(inverse - Math.round(inverse)) < 1e-6 * inverse ? `${text} (1/${Math.round(inverse)})` : text;
 }

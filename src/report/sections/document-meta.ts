@@ -1,4 +1,5 @@
 // The meta block printed on the cover and in every footer, taken from the loaded design.
+import { basename } from 'node:path';
 import type { LoadedDesign } from '../../design/design.ts';
 import { toolVersion } from '../../version.ts';
 import type { DocumentMeta } from '../document.ts';
@@ -21,7 +22,8 @@ export function documentMeta(loaded: LoadedDesign): DocumentMeta {
     status: PACKAGE_STATUS,
     date: project.date,
     inputHash: loaded.inputHash,
-    inputFile: loaded.file,
+    // The file name only: the folder it was read from must not change the package bytes.
+    inputFile: basename(loaded.file),
     toolVersion: toolVersion(),
     units,
   };
