@@ -67,7 +67,7 @@ function loadFromText(original: string, file: string, hash: string, env: LoadEnv
     throw new InputError(sortByPlace(dropMissingExplainedByTypo(problems).map(toDiagnostic)));
   }
   const { design, problems } = normalise(parsed.data, env);
-  const warnings = design ? plausibilityWarnings(parsed.data, design) : [];
+  const warnings = plausibilityWarnings(parsed.data, design?.pole.section.rootDiameter_m);
   const all = [...problems, ...warnings].map(toDiagnostic);
   const errors = sortByPlace(all.filter((d) => d.severity === 'error'));
   const warns = sortByPlace(all.filter((d) => d.severity === 'warning'));

@@ -1,8 +1,7 @@
 // Warnings for magnitudes that can be built but look like a slip: a wind speed typed as a
 // pressure, a pole taller than polebook is meant for, a panel's whole weight typed as its
 // weight per area. The ranges are ours (common practice), stated in each message.
-import type { Design } from '../design/design.ts';
-import { FT_M, PSF_PA, formatNumber, formatQuantity } from '../units/units.ts';
+import { FT_M, PSF_PA, formatNumber, formatQuantity, type UnitSystem } from '../units/units.ts';
 import { warning, type InputPath, type Problem } from './problem.ts';
 import type { DesignInput } from './schema.ts';
 
@@ -14,8 +13,8 @@ export const ARM_LENGTH_USUAL_M = 75 * FT_M;
 export const PANEL_WEIGHT_SUSPECT_PA = 25 * PSF_PA;
 
 /** A design pressure whose number, in the units the user typed, falls where basic wind speeds do. */
-function pressureSlip(p_Pa: number, design: Design): string | undefined {
-  if (design.units === 'us') {
+function pressureSlip(p_Pa: number, units: UnitSystem): string | undefined {
+  if (units === 'us') {
     const psf = p_Pa / PSF_PA;
     if (psf >= 85 && psf <= 200) {
       return `${formatNumber(psf, 4)} psf looks like a basic wind speed in mph (about 90-180 mph) typed in a pressure field; design pressures are typically tens of psf. Check the value`;
@@ -32,35 +31,39 @@ function pressureSlip(p_Pa: number, design: Design): string | undefined {
   return undefined;
 }
 
-export function plausibilityWarnings(input: DesignInput, design: Design): Problem[] {
+/** Runs on the schema output, so warnings are given even when the geometry has errors.
+ * poleRootDiameter_m is known only when the pole section could be built. */
+export function plausibilityWarnings(input: DesignInput, poleRootDiameter_m: number | undefined): Problem[] {
   const out: Problem[] = [];
+  const units = input.units;
   const wind = input.loads.wind;
   for (const key of ['pressure', 'panels', 'members', 'points'] as const) {
     const p = wind[key];
     if (p === undefined) continue;
-    const slip = pressureSlip(p, design);
+    const slip = pressureSlip(p, units);
     if (slip) out.push(warning(['loads', 'wind', key], slip));
   }
-  if (design.pole.height_m > POLE_HEIGHT_SCOPE_M * (1 + 1e-9)) {
+  const poleHeight_m = input.structure.pole.height;
+  if (poleHeight_m > POLE_HEIGHT_SCOPE_M * (1 + 1e-9)) {
     out.push(
-      warning(['structure', 'pole', 'height'], `a pole of ${formatQuantity(design.pole.height_m, 'length', design.units)} is taller than polebook's scope of 60 ft (18.3 m), a limit of ours; high-mast poles need checks polebook does not make. Check the value and its unit`),
+      warning(['structure', 'pole', 'height'], `a pole of ${formatQuantity(poleHeight_m, 'length', units)} is taller than polebook's scope of 60 ft (18.3 m), a limit of ours; high-mast poles need checks polebook does not make. Check the value and its unit`),
     );
   }
-  design.arms.forEach((a, i) => {
-    if (a.length_m > ARM_LENGTH_USUAL_M * (1 + 1e-9)) {
-      out.push(warning(['structure', 'arms', i, 'length'], `arm ${a.id} is ${formatQuantity(a.length_m, 'length', design.units)} long, beyond the usual 75 ft (22.9 m) of mast arms (our limit); check the value and its unit`));
+  (input.structure.arms ?? []).forEach((a, i) => {
+    if (a.length > ARM_LENGTH_USUAL_M * (1 + 1e-9)) {
+      out.push(warning(['structure', 'arms', i, 'length'], `arm ${a.id} is ${formatQuantity(a.length, 'length', units)} long, beyond the usual 75 ft (22.9 m) of mast arms (our limit); check the value and its unit`));
     }
   });
   (input.attachments?.panels ?? []).forEach((p, i) => {
     if (p.weightPerArea > PANEL_WEIGHT_SUSPECT_PA) {
       const path: InputPath = ['attachments', 'panels', i, 'weightPerArea'];
       out.push(
-        warning(path, `${formatQuantity(p.weightPerArea, 'pressure', design.units)} per panel area is far above the few psf (0.1-0.4 kPa) of sign panels with bracing; it reads like the panel's whole weight. Give weight per area = weight / (width x height)`),
+        warning(path, `${formatQuantity(p.weightPerArea, 'pressure', units)} per panel area is far above the few psf (0.1-0.4 kPa) of sign panels with bracing; it reads like the panel's whole weight. Give weight per area = weight / (width x height)`),
       );
     }
   });
-  const bolts = design.criteria.anchorBolts;
-  if (bolts && bolts.circleDiameter_m <= design.pole.section.rootDiameter_m) {
+  const bolts = input.criteria?.anchorBolts;
+  if (bolts && poleRootDiameter_m !== undefined && bolts.circleDiameter <= poleRootDiameter_m) {
     out.push(warning(['criteria', 'anchorBolts', 'circleDiameter'], 'the bolt circle is not larger than the pole base; anchor bolts normally sit outside the tube. Check the value and its unit'));
   }
   return out;
