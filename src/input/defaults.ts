@@ -137,8 +137,8 @@ export const DEFAULTS = {
   segments: {
     key: 'analysis.segmentsPerMember',
     label: 'Prismatic segments per tapered member',
-    value: 10,
-    source: 'common practice (the package shows the convergence with the segment count)',
+    value: 20,
+    source: 'polebook default: with 20 segments the tip deflection of tapered cantilevers is within 0.5 percent of the continuous taper (segment convergence study in tests/model); the package shows the convergence',
   },
   secondOrder: {
     key: 'analysis.secondOrder',
