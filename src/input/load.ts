@@ -1,13 +1,13 @@
 // Reading an input file: YAML (or JSON) text -> schema -> normalised Design, with every
 // problem located at its line and column and reported at once.
 import { createHash } from 'node:crypto';
-import { readFileSync } from 'node:fs';
 import { LineCounter, parseDocument } from 'yaml';
 import type { Design, LoadedDesign } from '../design/design.ts';
 import { InputError, type Diagnostic } from '../errors.ts';
 import type { UnitSystem } from '../units/units.ts';
 import { normalise } from './normalise.ts';
 import { plausibilityWarnings } from './plausibility.ts';
+import { readInputBytes } from './read-input-file.ts';
 import { locate } from './positions.ts';
 import { textPath } from './text-path.ts';
 import { formatPath, type Problem } from './problem.ts';
@@ -27,16 +27,11 @@ export function inputHash(bytes: Uint8Array | string): string {
   return createHash('sha256').update(bytes).digest('hex').slice(0, 12);
 }
 
-/** Reads and validates a design file. Throws InputError with all diagnostics. */
-export function loadDesignFile(file: string): LoadedDesign {
-  let bytes: Buffer;
-  try {
-    bytes = readFileSync(file);
-  } catch (e) {
-    const reason = (e as NodeJS.ErrnoException).code === 'ENOENT' ? 'no such file' : (e as Error).message;
-    throw new InputError([{ file, line: 1, col: 1, path: '', message: `cannot read the input file: ${reason}`, severity: 'error' }]);
-  }
-  return loadFromText(bytes.toString('utf8'), file, inputHash(bytes), { SOURCE_DATE_EPOCH: process.env.SOURCE_DATE_EPOCH });
+/** Reads and validates a design file. Throws InputError with all diagnostics.
+ * env defaults to the process environment (SOURCE_DATE_EPOCH). */
+export function loadDesignFile(file: string, env?: LoadEnv): LoadedDesign {
+  const bytes = readInputBytes(file);
+  return loadFromText(bytes.toString('utf8'), file, inputHash(bytes), env ?? { SOURCE_DATE_EPOCH: process.env.SOURCE_DATE_EPOCH });
 }
 
 /** Validates design text as if read from `file`. env defaults to the process environment. */

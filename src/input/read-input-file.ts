@@ -1,13 +1,17 @@
-// Reads an input file as UTF-8 text; a missing or unreadable file is bad input (exit 2).
+// Reading the input file's text; a file that cannot be read is bad input (exit code 2), not a crash.
 import { readFileSync } from 'node:fs';
 import { InputError } from '../errors.ts';
 
-export function readInputFile(file: string): string {
+export function readInputBytes(file: string): Buffer {
   try {
-    return readFileSync(file, 'utf8');
-  } catch (err) {
-    const code = (err as NodeJS.ErrnoException).code;
-    const why = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'is a folder, not a file' : `cannot be read (${code ?? 'unknown error'})`;
-    throw new InputError([{ file, line: 1, col: 1, path: '', message: `${why}; expected a polebook input file (.yaml, .yml or .json)`, severity: 'error' }]);
+    return readFileSync(file);
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    const reason = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder' : (e as Error).message;
+    throw new InputError([{ file, line: 1, col: 1, path: '', message: `cannot read the input file: ${reason}`, severity: 'error' }]);
   }
+}
+
+export function readInputFile(file: string): string {
+  return readInputBytes(file).toString('utf8');
 }
