@@ -69,3 +69,10 @@ describe('page flow', () => {
     }
   });
 });
+
+describe('model errors', () => {
+  it('a table row with the wrong number of cells is refused with the table named', async () => {
+    const bad: Block = { kind: 'table', title: 'Broken', header: ['a', 'b'], rows: [['1', '2'], ['3']] };
+    await expect(renderPdf(model([bad]))).rejects.toThrow(/table "Broken": row 2 has 1 cells, the header has 2/);
+  });
+});

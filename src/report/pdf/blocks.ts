@@ -144,6 +144,10 @@ function ruledLayout(titleRows: number, headerRows: number) {
 function tableContent(block: Extract<Block, { kind: 'table' }>, counter: SectionCounter): Content {
   counter.tables += 1;
   const n = block.header.length;
+  // A ragged table would make pdfmake fail deep inside its layout; say which table instead.
+  const ragged = block.rows.findIndex((r) => r.length !== n);
+  if (ragged >= 0) throw new Error(`table "${block.title}": row ${ragged + 1} has ${block.rows[ragged].length} cells, the header has ${n}`);
+  if (block.widths && block.widths.length !== n) throw new Error(`table "${block.title}": ${block.widths.length} widths for ${n} columns`);
   const titleRow: TableCell[] = [
     { text: `Table ${counter.label}.${counter.tables}  ${block.title}`, style: 'caption', colSpan: n, margin: [-2, 0, 0, 2] },
     ...Array.from({ length: n - 1 }, () => ({}) as TableCell),
