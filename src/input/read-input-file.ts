@@ -8,7 +8,7 @@ export function readInputBytes(file: string): Buffer {
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
     const reason = code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a folder' : (e as Error).message;
-    throw new InputError([{ file, line: 1, col: 1, path: '', message: `cannot read the input file: ${reason}`, severity: 'error' }]);
+    throw new InputError([{ file, line: 1, col: 1, path: '', message: `${reason}: cannot read the input file`, severity: 'error' }]);
   }
 }
 

@@ -1,10 +1,10 @@
 // Each file of the bad-input corpus gives an InputError whose first diagnostic points at the
-// mistake: line, column and key path as worked out from the file's text (tests/fixtures/bad/generate.py).
+// mistake: line, column and key path as worked out from the file's text (tests/fixtures/generate-bad-corpus.py).
 import { readdirSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { InputError, formatDiagnostic } from '../../src/errors.ts';
 import { loadDesignFile } from '../../src/input/index.ts';
-import { BAD_CORPUS, BAD_DIR } from '../fixtures/bad/corpus.ts';
+import { BAD_CORPUS, BAD_DIR } from '../fixtures/bad-corpus.ts';
 
 function firstDiagnostic(file: string) {
   try {
