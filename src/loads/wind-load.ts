@@ -1,0 +1,97 @@
+// Wind load cases from the user's design pressures, one per wind direction.
+// Members: cross-flow principle (see load-rules.ts); panels: cosine rule, force normal to
+// the face at the panel centroid; point attachments: pressure × effective projected area
+// in the wind direction. Offsets put their moments r × F on the members.
+import { qty, StepCollector } from '../calc/step.ts';
+import type { Design, WindDirection } from '../design/design.ts';
+import type { FrameModel, Vec3 } from '../model/frame.ts';
+import { elementEnds } from '../model/locate.ts';
+import { memberAxes } from '../model/member-axes.ts';
+import { diameterAt } from '../model/taper.ts';
+import { dot, norm, scale, sub } from '../model/vec3.ts';
+import { attachmentLoads, planUnit } from './attachment-loads.ts';
+import { iceWindCaseId, windCaseId } from './case-ids.ts';
+import type { AppliedLoad, LoadCase } from './load-types.ts';
+import { RULES } from './load-rules.ts';
+import { loadResultant } from './load-resultant.ts';
+
+/** sin θ below this: the member is taken as parallel to the wind (no load). */
+const PARALLEL_SIN = 1e-9;
+
+/** Component of the (unit, horizontal) wind direction normal to a member axis. */
+export function normalComponent(wind: Vec3, axis: Vec3): Vec3 {
+  return sub(wind, scale(axis, dot(wind, axis)));
+}
+
+export interface WindCaseOptions {
+  readonly kind: 'wind' | 'ice-wind';
+  /** Factor on the design pressures (1 for wind; the ice wind factor for ice-wind). */
+  readonly factor: number;
+}
+
+export function windLoadCase(design: Design, model: FrameModel, dir: WindDirection, opts: WindCaseOptions = { kind: 'wind', factor: 1 }): LoadCase {
+  const steps = new StepCollector();
+  const loads: AppliedLoad[] = [];
+  const wdir = planUnit(dir.angle_rad);
+  const w = design.wind;
+  const pressure = (p: number, what: string): number => {
+    if (opts.kind === 'wind') return p;
+    return steps.add({ description: `Wind pressure on ${what} with ice`, symbol: `p_${what}`, formula: 'p = f_ice × p', substituted: [String(opts.factor), ' × ', qty(p, 'pressure')], result: qty(opts.factor * p, 'pressure'), source: RULES.iceWind }).si;
+  };
+  const pm = pressure(w.membersPressure_Pa, 'members');
+  const pp = pressure(w.panelsPressure_Pa, 'panels');
+  const pa = pressure(w.pointsPressure_Pa, 'points');
+  const tag = opts.kind === 'wind' ? 'wind' : 'wind with ice';
+
+  for (const ax of memberAxes(design)) {
+    const info = model.members.find((m) => m.id === ax.id);
+    if (!info) throw new RangeError(`member ${ax.id} is missing from the frame model`);
+    const name = ax.kind === 'pole' ? 'pole' : `arm ${ax.id}`;
+    const origin = { source: `${tag} on ${name}` };
+    const n = normalComponent(wdir, ax.direction);
+    const sinT = norm(n);
+    const cosT = Math.min(1, Math.abs(dot(wdir, ax.direction)));
+    const theta = Math.acos(cosT);
+    steps.add({ description: `Angle between the wind and the ${name} axis`, symbol: `θ_${ax.id}`, formula: 'cos θ = |ŵ · x̂|', substituted: [`|ŵ · x̂| = ${cosT.toFixed(4)}`], result: qty(theta, 'angle'), source: RULES.memberWind });
+    const s2 = sinT * sinT;
+    const Dr = diameterAt(ax.section, ax.length_m, 0);
+    const Dt = diameterAt(ax.section, ax.length_m, ax.length_m);
+    for (const [where, D] of [['root', Dr], ['tip', Dt]] as const) {
+      steps.add({ description: `Wind force per length on the ${name} at its ${where}`, symbol: `w_${where}`, formula: 'w = p D sin²θ', substituted: [qty(pm, 'pressure'), ' × ', qty(D, 'section'), ' × sin²(', qty(theta, 'angle'), ')'], result: qty(pm * D * s2, 'lineLoad'), source: `${RULES.memberWind}; ${RULES.memberWindDiameter}` });
+    }
+    steps.add({ description: `Wind force on the ${name}, normal to its axis`, symbol: `F_${ax.id}`, formula: 'F = L (w_root + w_tip) / 2', substituted: [qty(ax.length_m, 'length'), ' × (', qty(pm * Dr * s2, 'lineLoad'), ' + ', qty(pm * Dt * s2, 'lineLoad'), ') / 2'], result: qty((ax.length_m * pm * s2 * (Dr + Dt)) / 2, 'force'), source: 'integral of a linearly varying load' });
+    if (sinT < PARALLEL_SIN) continue;
+    const direction = scale(n, 1 / sinT);
+    for (const id of info.elements) {
+      const el = model.elements[id];
+      // The member axis is straight, so each element shares its direction.
+      loads.push({ kind: 'distributed', element: id, axes: 'global', direction, wA_Npm: pm * el.diameterI_m * s2, wB_Npm: pm * el.diameterJ_m * s2, a_m: 0, b_m: elementEnds(model, el).length_m, origin });
+    }
+  }
+
+  for (const a of design.attachments) {
+    if (a.kind === 'panel') {
+      const cosA = Math.cos(dir.angle_rad - a.faceNormal_rad);
+      const area = a.width_m * a.height_m;
+      const F = pp * area * cosA;
+      steps.add({ description: `Wind force on panel ${a.id}, normal to its face`, symbol: `F_${a.id}`, formula: 'F = p × b × h × cos α', substituted: [qty(pp, 'pressure'), ' × ', qty(a.width_m, 'length'), ' × ', qty(a.height_m, 'length'), ` × cos(${(((dir.angle_rad - a.faceNormal_rad) * 180) / Math.PI).toFixed(1)}°)`], result: qty(F, 'force'), source: RULES.panelWind });
+      loads.push(...attachmentLoads(design, model, steps, a, scale(planUnit(a.faceNormal_rad), F), `${tag} on panel`));
+    } else {
+      const F = pa * a.windArea_m2;
+      steps.add({ description: `Wind force on ${a.kind} ${a.id}`, symbol: `F_${a.id}`, formula: 'F = p × A', substituted: [qty(pa, 'pressure'), ' × ', qty(a.windArea_m2, 'area')], result: qty(F, 'force'), source: RULES.pointWind });
+      loads.push(...attachmentLoads(design, model, steps, a, scale(wdir, F), `${tag} on ${a.kind}`));
+    }
+  }
+
+  const R = loadResultant(model, loads).force_N;
+  const along = dot(R, wdir);
+  steps.add({ description: 'Total horizontal wind force along the wind direction (sum of the loads of this case)', symbol: 'ΣF_w', formula: 'ΣF_w = Σ F · ŵ', substituted: [qty(along, 'force')], result: qty(along, 'force'), source: 'sum of the loads above' });
+  const across = Math.hypot(R[0] - along * wdir[0], R[1] - along * wdir[1]);
+  if (across > 1e-6 * Math.max(1, Math.abs(along))) {
+    steps.add({ description: 'Total horizontal force across the wind direction (panel faces and members not normal to the wind)', symbol: 'ΣF_⊥', formula: 'ΣF_⊥ = |ΣF − (ΣF · ŵ) ŵ|', substituted: [qty(across, 'force')], result: qty(across, 'force'), source: 'sum of the loads above' });
+  }
+  const id = opts.kind === 'wind' ? windCaseId(dir.angle_rad) : iceWindCaseId(dir.angle_rad);
+  const deg = ((dir.angle_rad * 180) / Math.PI).toFixed(1).replace(/\.0$/, '');
+  const description = opts.kind === 'wind' ? `Wind toward ${deg}° (${dir.label})` : `Wind with ice toward ${deg}° (${dir.label}), pressures × ${opts.factor}`;
+  return { id, kind: opts.kind, description, windAngle_rad: dir.angle_rad, loads, steps: steps.steps };
+}
