@@ -54,6 +54,9 @@ function loadFromText(original: string, file: string, hash: string, env: LoadEnv
     throw new InputError(uniquePlaces(sortByPlace(doc.errors.map((e) => yamlErrorDiagnostic(e, text, lines, file)))));
   }
   const data: unknown = doc.toJS({ maxAliasCount: 100 });
+  if (data === null || data === undefined) {
+    throw new InputError([{ file, line: 1, col: 1, path: '', message: 'the file is empty; expected an input starting with formatVersion: 1 (`polebook new <kind>` writes a starter)', severity: 'error' }]);
+  }
   const system: UnitSystem = isRecord(data) && data.units === 'si' ? 'si' : 'us';
   const schema = schemaFor(system);
   const parsed = schema.safeParse(data);

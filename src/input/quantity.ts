@@ -8,7 +8,7 @@ export const DIM_NAMES: Readonly<Record<Dim, string>> = {
   section: 'length',
   area: 'area',
   force: 'force',
-  weight: 'weight (force)',
+  weight: 'weight',
   moment: 'moment',
   pressure: 'pressure',
   stress: 'stress',
@@ -26,6 +26,11 @@ export const DIM_NAMES: Readonly<Record<Dim, string>> = {
   ratio: 'ratio',
 };
 
+/** "a length", "an angle". */
+export function withArticle(noun: string): string {
+  return /^[aeiou]/i.test(noun) ? `an ${noun}` : `a ${noun}`;
+}
+
 export type Bound = 'positive' | 'nonNegative' | 'any';
 
 const uniq = (xs: string[]): string[] => [...new Set(xs)];
@@ -37,15 +42,15 @@ export function quantityProblem(raw: number | string, dim: Dim, system: UnitSyst
   const expected = uniq(unitSymbols(dim)).join(', ');
   const name = DIM_NAMES[dim];
   if (r.reason === 'syntax') {
-    return `cannot read '${String(raw)}' as a ${name}; expected a number (in ${SYSTEM_UNIT[system][dim]}) or a number with a unit, e.g. "${example(dim, system)}"`;
+    return `cannot read '${String(raw)}' as ${withArticle(name)}; expected a number (in ${SYSTEM_UNIT[system][dim]}) or a number with a unit, e.g. "${example(dim, system)}"`;
   }
   if (r.reason === 'dimension') {
     const of = uniq((r.dimOf ?? []).map((d) => DIM_NAMES[d])).join(' or ');
-    return `'${r.unit}' is a unit of ${of}, but a ${name} is expected here; expected one of: ${expected}`;
+    return `'${r.unit}' is a unit of ${of}, but ${withArticle(name)} is expected here; expected one of: ${expected}`;
   }
   const sameLetters = UNITS.find((d) => d.dim === dim && d.symbol.toLowerCase() === (r.unit ?? '').toLowerCase());
   const hint = sameLetters ? `did you mean '${sameLetters.symbol}'? ` : '';
-  return `unknown unit '${r.unit}'; ${hint}expected a ${name} unit: ${expected}`;
+  return `unknown unit '${r.unit}'; ${hint}expected ${withArticle(name)} unit: ${expected}`;
 }
 
 function example(dim: Dim, system: UnitSystem): string {
