@@ -7,7 +7,7 @@ import type {
 import { DEG_RAD, formatQuantity, type UnitSystem } from '../units/units.ts';
 import { AssumptionLog } from './assumptions.ts';
 import { defaultCombinations, userCombinations } from './combinations.ts';
-import { error, type InputPath, type Problem } from './problem.ts';
+import { error, warning, type InputPath, type Problem } from './problem.ts';
 import { packageDate } from './project-date.ts';
 import type { DesignInput, OffsetInput } from './schema.ts';
 import { buildSection } from './section.ts';
@@ -65,10 +65,13 @@ export function normalise(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?
   const ice = buildIce(input, log);
   const fatigue = buildFatigue(input, log);
   const criteria = buildCriteria(input, log, problems);
-  const serviceWindFactor = log.take('serviceWindFactor', input.criteria?.serviceWindFactor);
+  const useDefaultSet = input.combinations === undefined || input.combinations === 'default';
+  if (!useDefaultSet && input.criteria?.serviceWindFactor !== undefined) {
+    problems.push(warning(['criteria', 'serviceWindFactor'], 'serviceWindFactor applies only to the default combinations; your list of combinations sets its own factors, so it is not used'));
+  }
   const combinations: CombinationSpec[] =
     input.combinations === undefined || input.combinations === 'default'
-      ? defaultCombinations(ice !== null, serviceWindFactor)
+      ? defaultCombinations(ice !== null, log.take('serviceWindFactor', input.criteria?.serviceWindFactor))
       : userCombinations(input.combinations, ice !== null, problems);
   const analysis = buildAnalysis(input, log);
 

@@ -8,11 +8,12 @@ import { STRUCTURE_KIND_VALUES } from './schema.ts';
 
 export const STRUCTURE_KINDS: readonly StructureKind[] = STRUCTURE_KIND_VALUES;
 
-/** The folder holding package.json: from src/input or from the compiled dist/src/input. */
+/** The folder holding package.json and templates/: from src/input or from the compiled
+ * dist/src/input (a build may copy package.json into dist/, so templates/ is checked too). */
 export function packageRoot(): string {
   let dir = dirname(fileURLToPath(import.meta.url));
   for (;;) {
-    if (existsSync(join(dir, 'package.json'))) return dir;
+    if (existsSync(join(dir, 'package.json')) && existsSync(join(dir, 'templates'))) return dir;
     const up = dirname(dir);
     if (up === dir) throw new Error('polebook: cannot find package.json above the input module');
     dir = up;
