@@ -135,6 +135,7 @@ function runCombination(solver: Solver, loads: readonly FactoredLoad[], opts: An
   if (opts.secondOrder) {
     let uPrev = u1;
     let N = axialForces(prep, first.U, ls);
+    let Nused = N;
     let converged = false;
     while (iterations < opts.maxIterations) {
       const K = assemble(prep, N);
@@ -145,8 +146,8 @@ function runCombination(solver: Solver, loads: readonly FactoredLoad[], opts: An
       for (let k = 0; k < u.length; k++) diff = Math.max(diff, Math.abs(u[k] - uPrev[k]));
       const scale = maxAbs(u);
       change = scale > 0 ? diff / scale : 0;
-      final = stateFrom(prep, ls, expand(prep, u), N);
-      N = axialForces(prep, final.U, ls);
+      Nused = N;
+      N = axialForces(prep, expand(prep, u), ls);
       uPrev = u;
       if (change < opts.tolerance) {
         converged = true;
@@ -161,6 +162,8 @@ function runCombination(solver: Solver, loads: readonly FactoredLoad[], opts: An
         { combination: id },
       );
     }
+    // Member forces use the axial forces that built the matrix the displacements solve.
+    final = stateFrom(prep, ls, expand(prep, uPrev), Nused);
     // Out-of-balance force with the geometric stiffness rebuilt from the final axial forces.
     const r = assemble(prep, N).multiply(uPrev);
     for (let k = 0; k < r.length; k++) r[k] -= F[k];

@@ -24,8 +24,13 @@ export interface PreparedElement {
   readonly T: Float64Array;
   readonly kLocal: Float64Array;
   readonly kGlobal: Float64Array;
+  /** Geometric stiffness for N = 1 N (it is linear in N), local and global. */
+  readonly kgUnitLocal: Float64Array;
+  readonly kgUnitGlobal: Float64Array;
   /** Global dof indices (node*6 + c) of the element's 12 node dofs. */
   readonly dofs: Int32Array;
+  /** Equation numbers of the 12 node dofs (-1 where fixed). */
+  readonly eqs: Int32Array;
 }
 
 export interface PreparedModel {
@@ -37,6 +42,7 @@ export interface PreparedModel {
 }
 
 export function prepareModel(model: FrameModel): PreparedModel {
+  const dofMap = numberDofs(model);
   const elements = model.elements.map((el, idx): PreparedElement => {
     if (el.id !== idx) throw new Error(`element id ${el.id} differs from its index ${idx}`);
     const geo = elementGeometry(model, el);
@@ -47,7 +53,11 @@ export function prepareModel(model: FrameModel): PreparedModel {
       dofs[c] = el.i * 6 + c;
       dofs[6 + c] = el.j * 6 + c;
     }
-    return { el, geo, T, kLocal, kGlobal: congruent12(T, kLocal), dofs };
+    const kgUnitLocal = geometricStiffnessLocal(el, geo.L, 1);
+    return {
+      el, geo, T, kLocal, kGlobal: congruent12(T, kLocal), kgUnitLocal, kgUnitGlobal: congruent12(T, kgUnitLocal),
+      dofs, eqs: Int32Array.from(dofs, (d) => dofMap.eq[d]),
+    };
   });
   model.nodes.forEach((n, idx) => {
     if (n.id !== idx) throw new Error(`node id ${n.id} differs from its index ${idx}`);
@@ -57,7 +67,7 @@ export function prepareModel(model: FrameModel): PreparedModel {
     degree[el.i]++;
     degree[el.j]++;
   }
-  return { model, elements, dofs: numberDofs(model), degree };
+  return { model, elements, dofs: dofMap, degree };
 }
 
 /** Loads of one analysis, already multiplied by their combination factors. */
@@ -134,22 +144,23 @@ export function expand(prep: PreparedModel, x: ArrayLike<number>): Float64Array 
 export function assemble(prep: PreparedModel, axialN: Float64Array | null): BandedMatrix {
   const { eq, nEq, bw } = prep.dofs;
   const K = new BandedMatrix(nEq, bw);
+  const data = K.data;
+  const w = bw + 1;
   for (let e = 0; e < prep.elements.length; e++) {
     const pe = prep.elements[e];
-    let ke = pe.kGlobal;
+    const ke = pe.kGlobal;
+    const kg = pe.kgUnitGlobal;
     const N = axialN ? axialN[e] : 0;
-    if (N !== 0) {
-      const kg = congruent12(pe.T, geometricStiffnessLocal(pe.el, pe.geo.L, N));
-      ke = ke.map((v, idx) => v + kg[idx]);
-    }
+    const eqs = pe.eqs;
     for (let a = 0; a < 12; a++) {
-      const ea = eq[pe.dofs[a]];
+      const ea = eqs[a];
       if (ea < 0) continue;
+      const row = ea * w - ea;
       for (let b = 0; b < 12; b++) {
-        const eb = eq[pe.dofs[b]];
+        const eb = eqs[b];
         if (eb < ea) continue;
-        const v = ke[a * 12 + b];
-        if (v !== 0) K.add(ea, eb, v);
+        const v = N === 0 ? ke[a * 12 + b] : ke[a * 12 + b] + N * kg[a * 12 + b];
+        if (v !== 0) data[row + eb] += v;
       }
     }
   }
@@ -182,11 +193,25 @@ export function factorOrThrow(prep: PreparedModel, K: BandedMatrix, combination:
   }
 }
 
-/** Displacements of the element's clear ends in local axes. */
+/** Displacements of the element's clear ends in local axes: per end, R (u + theta x r) and R theta. */
 export function localEndDisplacements(pe: PreparedElement, U: ArrayLike<number>): Float64Array {
-  const dg = new Float64Array(12);
-  for (let k = 0; k < 12; k++) dg[k] = U[pe.dofs[k]];
-  return mulVec12(pe.T, dg);
+  const d = new Float64Array(12);
+  endToLocal(pe.geo.R, U, pe.el.i * 6, pe.el.offsetI_m, d, 0);
+  endToLocal(pe.geo.R, U, pe.el.j * 6, pe.el.offsetJ_m, d, 6);
+  return d;
+}
+
+function endToLocal(R: Float64Array, U: ArrayLike<number>, n: number, r: readonly number[], d: Float64Array, off: number): void {
+  const tx = U[n + 3];
+  const ty = U[n + 4];
+  const tz = U[n + 5];
+  const ux = U[n] + ty * r[2] - tz * r[1];
+  const uy = U[n + 1] + tz * r[0] - tx * r[2];
+  const uz = U[n + 2] + tx * r[1] - ty * r[0];
+  for (let a = 0; a < 3; a++) {
+    d[off + a] = R[a * 3] * ux + R[a * 3 + 1] * uy + R[a * 3 + 2] * uz;
+    d[off + 3 + a] = R[a * 3] * tx + R[a * 3 + 1] * ty + R[a * 3 + 2] * tz;
+  }
 }
 
 /** End forces on the element by the nodes, local: (k + kg(N)) d + f_fixed. */
@@ -194,18 +219,22 @@ export function elementEndForces(pe: PreparedElement, U: ArrayLike<number>, fef:
   const d = localEndDisplacements(pe, U);
   const f = mulVec12(pe.kLocal, d);
   if (N !== 0) {
-    const g = mulVec12(geometricStiffnessLocal(pe.el, pe.geo.L, N), d);
-    for (let k = 0; k < 12; k++) f[k] += g[k];
+    const g = mulVec12(pe.kgUnitLocal, d);
+    for (let k = 0; k < 12; k++) f[k] += N * g[k];
   }
   if (fef) for (let k = 0; k < 12; k++) f[k] += fef[k];
   return f;
 }
 
-/** Mean axial force (tension +) of each element from its elastic end forces. */
+/** Mean axial force (tension +) of each element from its elastic end forces, (f_j,x - f_i,x) / 2. */
 export function axialForces(prep: PreparedModel, U: ArrayLike<number>, ls: LoadSet): Float64Array {
   return Float64Array.from(prep.elements, (pe, e) => {
-    const f = elementEndForces(pe, U, ls.fixedEnd[e], 0);
-    return (f[6] - f[0]) / 2;
+    const d = localEndDisplacements(pe, U);
+    const EA_L = (pe.el.E_Pa * pe.el.A_m2) / pe.geo.L;
+    const fef = ls.fixedEnd[e];
+    const fi = EA_L * (d[0] - d[6]) + (fef ? fef[0] : 0);
+    const fj = EA_L * (d[6] - d[0]) + (fef ? fef[6] : 0);
+    return (fj - fi) / 2;
   });
 }
 

@@ -28,19 +28,22 @@ export function addPoly(a: Poly, b: Poly): Poly {
 /** Chebyshev points of the interpolating cubic (interior of [-1, 1], so one-sided values never enter). */
 export const CHEB4 = [0, 1, 2, 3].map((k) => Math.cos(((2 * k + 1) * Math.PI) / 8));
 
-/** Coefficients of the cubic through (CHEB4[k], y[k]) (Lagrange form expanded). */
+/** Lagrange basis polynomials on CHEB4, expanded: LAGRANGE[k][j] is the t^j coefficient of basis k. */
+const LAGRANGE: readonly Poly[] = CHEB4.map((tk, k) => {
+  let basis: Poly = [1];
+  let denom = 1;
+  CHEB4.forEach((tm, m) => {
+    if (m === k) return;
+    basis = multiply(basis, [-tm, 1]);
+    denom *= tk - tm;
+  });
+  return basis.map((v) => v / denom);
+});
+
+/** Coefficients of the cubic through (CHEB4[k], y[k]). */
 export function cubicThrough(y: readonly number[]): Poly {
-  let out: Poly = [0, 0, 0, 0];
-  for (let k = 0; k < 4; k++) {
-    let basis: Poly = [1];
-    let denom = 1;
-    for (let m = 0; m < 4; m++) {
-      if (m === k) continue;
-      basis = multiply(basis, [-CHEB4[m], 1]);
-      denom *= CHEB4[k] - CHEB4[m];
-    }
-    out = addPoly(out, basis.map((v) => (v * y[k]) / denom));
-  }
+  const out = [0, 0, 0, 0];
+  for (let k = 0; k < 4; k++) for (let j = 0; j < 4; j++) out[j] += y[k] * LAGRANGE[k][j];
   return out;
 }
 
@@ -84,7 +87,7 @@ export function rootsIn(c: Poly, lo: number, hi: number): number[] {
 
 /** Max and min of c on [-1, 1] with their t. */
 export function extremaOn(c: Poly): { max: number; tMax: number; min: number; tMin: number } {
-  const ts = [-1, 1, ...rootsIn(derivative(c), -1, 1)];
+  const ts = [-1, 1, ...(c.length <= 4 ? quadraticRoots(derivative(c)) : rootsIn(derivative(c), -1, 1))];
   let max = -Infinity;
   let min = Infinity;
   let tMax = -1;
@@ -95,4 +98,20 @@ export function extremaOn(c: Poly): { max: number; tMax: number; min: number; tM
     if (v < min) [min, tMin] = [v, t];
   }
   return { max, tMax, min, tMin };
+}
+
+/** Real roots in (-1, 1) of a polynomial of degree <= 2 (closed form, stable variant). */
+function quadraticRoots(c: Poly): number[] {
+  const [c0 = 0, c1 = 0, c2 = 0] = c;
+  const scale = Math.max(Math.abs(c0), Math.abs(c1), Math.abs(c2));
+  if (scale === 0) return [];
+  let roots: number[];
+  if (Math.abs(c2) <= 1e-14 * scale) roots = Math.abs(c1) <= 1e-14 * scale ? [] : [-c0 / c1];
+  else {
+    const disc = c1 * c1 - 4 * c2 * c0;
+    if (disc < 0) return [];
+    const q = -0.5 * (c1 + Math.sign(c1 || 1) * Math.sqrt(disc));
+    roots = q === 0 ? [0] : [q / c2, c0 / q];
+  }
+  return roots.filter((t) => t > -1 && t < 1);
 }
