@@ -56,7 +56,7 @@ describe('analyzeAll and envelope', () => {
     expect(Object.isFrozen(r.displacements[tip])).toBe(true);
     expect(Object.isFrozen(r.members.m.stations[0])).toBe(true);
     expect(() => {
-      (r.displacements as number[][])[tip][0] = 1;
+      (r.displacements as unknown as number[][])[tip][0] = 1;
     }).toThrow();
   });
 
