@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildLoadCases } from '../../src/loads/build-load-cases.ts';
 import { directionKey } from '../../src/loads/case-ids.ts';
-import type { AppliedLoad } from '../../src/loads/load-types.ts';
+import type { AppliedLoad, ElementPointLoad } from '../../src/loads/load-types.ts';
 import { windLoadCase } from '../../src/loads/wind-load.ts';
 import { buildFrame } from '../../src/model/build-frame.ts';
 import { deg, makeDesign, testArm, testHead, testPanel } from '../model/design-factory.ts';
@@ -84,7 +84,7 @@ describe('members at an angle to the wind (cross-flow rule)', () => {
 });
 
 const moments = (loads: readonly AppliedLoad[], source: string) =>
-  loads.filter((l) => l.kind === 'point-moment' && l.origin.source.includes(source)) as Extract<AppliedLoad, { kind: 'point-moment' }>[];
+  loads.filter((l) => l.kind === 'point-moment' && l.origin.source.includes(source)) as ElementPointLoad[];
 
 describe('panels and point attachments', () => {
   it('panel hung below a horizontal arm: torque on the arm = force × vertical offset', () => {
