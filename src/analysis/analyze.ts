@@ -102,6 +102,7 @@ function solution(prep: PreparedModel, ls: LoadSet, st: State, spacing_m: number
     f: st.endForces[e],
     N: st.Nkg[e],
     loads: ls.local[e],
+    fixedEnd: ls.fixedEnd[e],
   }));
   const reacts: Reaction[] = reactions(prep, st.U, ls, st.endForces);
   const members: Record<string, MemberStations> = {};

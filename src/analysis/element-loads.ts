@@ -34,6 +34,8 @@ export function resolveElementLoad(
 ): LocalLoad {
   const what = `load '${load.origin.source}' on element ${load.element}`;
   const dir = unitDirection(load.direction, what);
+  const values = load.kind === 'distributed' ? [load.wA_Npm, load.wB_Npm] : [load.value];
+  if (!values.every(Number.isFinite)) throw new Error(`${what}: magnitude is not a number`);
   const local = load.axes === 'local' ? ([dir[0], dir[1], dir[2]] as Vec3) : toLocal3(R, dir);
   const scaled = (w: number): Vec3 => [local[0] * w * factor, local[1] * w * factor, local[2] * w * factor];
   if (load.kind === 'distributed') {

@@ -41,10 +41,33 @@ export interface PreparedModel {
   readonly degree: Int32Array;
 }
 
+/** Rejects numbers that would otherwise flow silently into wrong results (NaN, zero stiffness). */
+function validateModel(model: FrameModel): void {
+  model.nodes.forEach((n, idx) => {
+    if (n.id !== idx) throw new Error(`node id ${n.id} differs from its index ${idx}`);
+    if (!n.xyz_m.every(Number.isFinite)) throw new Error(`node ${idx} (${n.tag}) has a coordinate that is not a number`);
+  });
+  model.elements.forEach((el, idx) => {
+    if (el.id !== idx) throw new Error(`element id ${el.id} differs from its index ${idx}`);
+    if (!model.nodes[el.i] || !model.nodes[el.j]) throw new Error(`element ${idx} (${el.member}) names a node that does not exist`);
+    for (const key of ['E_Pa', 'G_Pa', 'A_m2', 'Iy_m4', 'Iz_m4', 'J_m4'] as const) {
+      if (!(el[key] > 0 && Number.isFinite(el[key]))) throw new Error(`element ${idx} (${el.member}): ${key} = ${el[key]} must be a positive number`);
+    }
+    if (!(el.massPerLength_kgm >= 0)) throw new Error(`element ${idx} (${el.member}): massPerLength_kgm must be >= 0`);
+    if (![...el.offsetI_m, ...el.offsetJ_m, ...el.refVector].every(Number.isFinite)) {
+      throw new Error(`element ${idx} (${el.member}): offset or refVector is not a number`);
+    }
+  });
+  for (const s of model.supports) {
+    if (!model.nodes[s.node]) throw new Error(`support at node ${s.node}, which does not exist`);
+    if (!s.springs.every((k) => k >= 0 && Number.isFinite(k))) throw new Error(`support at node ${s.node}: springs must be >= 0`);
+  }
+}
+
 export function prepareModel(model: FrameModel): PreparedModel {
+  validateModel(model);
   const dofMap = numberDofs(model);
   const elements = model.elements.map((el, idx): PreparedElement => {
-    if (el.id !== idx) throw new Error(`element id ${el.id} differs from its index ${idx}`);
     const geo = elementGeometry(model, el);
     const T = elementTransform(geo.R, el.offsetI_m, el.offsetJ_m);
     const kLocal = elasticStiffnessLocal(el, geo.L);
@@ -58,9 +81,6 @@ export function prepareModel(model: FrameModel): PreparedModel {
       el, geo, T, kLocal, kGlobal: congruent12(T, kLocal), kgUnitLocal, kgUnitGlobal: congruent12(T, kgUnitLocal),
       dofs, eqs: Int32Array.from(dofs, (d) => dofMap.eq[d]),
     };
-  });
-  model.nodes.forEach((n, idx) => {
-    if (n.id !== idx) throw new Error(`node id ${n.id} differs from its index ${idx}`);
   });
   const degree = new Int32Array(model.nodes.length);
   for (const el of model.elements) {
@@ -108,6 +128,7 @@ export function buildLoadSet(prep: PreparedModel, loads: readonly FactoredLoad[]
 
 function addNodal(nodal: Float64Array, l: NodalLoad, factor: number, model: FrameModel): void {
   if (!model.nodes[l.node]) throw new Error(`load '${l.origin.source}' names node ${l.node}, which does not exist`);
+  if (![...l.F_N, ...l.M_Nm].every(Number.isFinite)) throw new Error(`load '${l.origin.source}' at node ${l.node} is not a number`);
   for (let c = 0; c < 3; c++) {
     nodal[l.node * 6 + c] += factor * l.F_N[c];
     nodal[l.node * 6 + 3 + c] += factor * l.M_Nm[c];

@@ -8,13 +8,16 @@
 // with v, w the Hermite cubics and the axial force N of the geometric stiffness; this is the
 // P-delta moment N (v(x) - v_i) that the consistent geometric stiffness carries, so the
 // statics at x = L reproduce the end forces at end j exactly.
+// Displacements at a station: Hermite cubic (transverse) and linear (axial) interpolation of the
+// end displacements, plus the particular solution of the element's own loads with both ends held
+// (first order; in a second-order analysis that small in-element part is not amplified).
 import type { FrameModel, MemberInfo } from '../model/frame.ts';
 import type { EnvelopeComponent, Extreme, MemberStations, Station, StationSide } from './analysis-types.ts';
 import { toGlobal3 } from './element-geometry.ts';
 import { intensityAt, SNAP_M, type LocalLoad } from './element-loads.ts';
 import type { LoadSet, PreparedElement, PreparedModel } from './frame-system.ts';
 import { addPoly, cubicThrough, CHEB4, extremaOn, multiply } from './polynomial.ts';
-import { localDisplacementAt } from './shape-functions.ts';
+import { GAUSS3, localDisplacementAt } from './shape-functions.ts';
 
 export interface ElementState {
   readonly pe: PreparedElement;
@@ -25,6 +28,8 @@ export interface ElementState {
   /** Axial force used in the geometric stiffness (0 for first order). */
   readonly N: number;
   readonly loads: readonly LocalLoad[];
+  /** Fixed-end forces of the element loads (local), null when unloaded. */
+  readonly fixedEnd: Float64Array | null;
 }
 
 type Six = [number, number, number, number, number, number];
@@ -75,9 +80,43 @@ export function internalForcesAt(st: ElementState, x: number, side: StationSide)
   return [F[0], F[1], F[2], M[0], M[1], M[2]];
 }
 
+/**
+ * Displacement inside the element from its loads with both ends held (the particular solution):
+ * EIz v'' = Mz, EIy w'' = -My, EA u' = N of the fixed-fixed element, zero value and slope at end i
+ * (and so at end j). The fixed-fixed moments are piecewise cubic, so 3-point Gauss on each piece
+ * between load breakpoints integrates (x - t) M(t) exactly.
+ */
+function particularDisplacement(st: ElementState, x: number): [number, number, number] {
+  const fef = st.fixedEnd;
+  if (!fef || x <= 0) return [0, 0, 0];
+  const { el } = st.pe;
+  const held: ElementState = { pe: st.pe, d: ZERO12, f: fef, N: 0, loads: st.loads, fixedEnd: null };
+  const cuts = pieceBreaks(st).filter((c) => c < x - SNAP_M);
+  cuts.push(x);
+  let u = 0;
+  let v = 0;
+  let w = 0;
+  for (let k = 0; k + 1 < cuts.length; k++) {
+    const h = (cuts[k + 1] - cuts[k]) / 2;
+    for (let g = 0; g < 3; g++) {
+      const t = cuts[k] + h * (1 + GAUSS3.t[g]);
+      const f = internalForcesAt(held, t, 'both');
+      const wt = h * GAUSS3.w[g];
+      u += (wt * f[0]) / (el.E_Pa * el.A_m2);
+      v += (wt * (x - t) * f[5]) / (el.E_Pa * el.Iz_m4);
+      w -= (wt * (x - t) * f[4]) / (el.E_Pa * el.Iy_m4);
+    }
+  }
+  return [u, v, w];
+}
+
+const ZERO12 = new Float64Array(12);
+
 function stationAt(st: ElementState, x: number, side: StationSide, s: number): Station {
   const [N, Vy, Vz, T, My, Mz] = internalForcesAt(st, x, side);
-  const [ux, uy, uz] = toGlobal3(st.pe.geo.R, localDisplacementAt(st.d, x, st.pe.geo.L));
+  const local = localDisplacementAt(st.d, x, st.pe.geo.L);
+  const part = particularDisplacement(st, x);
+  const [ux, uy, uz] = toGlobal3(st.pe.geo.R, [local[0] + part[0], local[1] + part[1], local[2] + part[2]]);
   return {
     s_m: s, element: st.pe.el.id, x_m: x, side,
     N_N: N, Vy_N: Vy, Vz_N: Vz, T_Nm: T, My_Nm: My, Mz_Nm: Mz, ux_m: ux, uy_m: uy, uz_m: uz,
@@ -172,6 +211,7 @@ export function memberStations(
     COMPONENTS.map((c) => [c, { max: { value: -Infinity, s_m: 0 }, min: { value: Infinity, s_m: 0 } }]),
   ) as ExtremeAcc;
   const ids = member.elements;
+  if (ids.length === 0) throw new Error(`member '${member.id}' has no elements`);
   ids.forEach((id, k) => {
     const st = states[id];
     const { sI_m, sJ_m } = st.pe.el;
