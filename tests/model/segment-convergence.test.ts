@@ -14,7 +14,9 @@ import { describe, expect, it } from 'vitest';
 import type { TubeSection } from '../../src/design/design.ts';
 import { buildFrame, RECOMMENDED_SEGMENTS_PER_MEMBER } from '../../src/model/build-frame.ts';
 import type { SegmentRule } from '../../src/model/segment-properties.ts';
-import { makeDesign, polySection, roundSection, testPole } from './design-factory.ts';
+import { solveLoads } from '../../src/analysis/index.ts';
+import { elementEnds } from '../../src/model/locate.ts';
+import { makeDesign, polySection, roundSection, testArm, testPole } from './design-factory.ts';
 
 const E = 200e9;
 const P = 1000;
@@ -116,4 +118,45 @@ describe('segment count convergence (tapered cantilever tip deflection)', () => 
       }
     });
   }
+});
+
+// The same study through the frame analysis (src/analysis solveLoads): the model that
+// buildFrame makes, solved by the direct stiffness method. Euler-Bernoulli elements are
+// exact for prismatic pieces, so the solver must reproduce the closed-form chain sum, and
+// at the default count it must lie within 0.5 % of the continuous taper.
+describe('segment count convergence through the frame analysis', () => {
+  for (const c of cases) {
+    it(`${c.name}: tip deflection under a tip load and a uniform load`, () => {
+      const exact = exactTip(c);
+      const design = makeDesign({ pole: testPole({ height_m: c.L, section: c.section }), arms: [], attachments: [], material: { E_Pa: E, G_Pa: 77e9, Fy_Pa: 345e6, density_kgm3: 7850 } });
+      const model = buildFrame(design, { segmentsPerMember: RECOMMENDED_SEGMENTS_PER_MEMBER });
+      const top = model.nodes.length - 1;
+      const tip = solveLoads(model, [{ kind: 'nodal', node: top, F_N: [P, 0, 0], M_Nm: [0, 0, 0], origin: { source: 'test tip load' } }]).displacements[top][0];
+      const uni = solveLoads(
+        model,
+        model.elements.map((e) => ({ kind: 'distributed' as const, element: e.id, axes: 'global' as const, direction: [1, 0, 0] as const, wA_Npm: w, wB_Npm: w, a_m: 0, b_m: elementEnds(model, e).length_m, origin: { source: 'test uniform load' } })),
+      ).displacements[top][0];
+      const chain = chainTip(c, RECOMMENDED_SEGMENTS_PER_MEMBER);
+      expect(relErr(tip, chain.tipLoad)).toBeLessThan(1e-8);
+      expect(relErr(uni, chain.uniform)).toBeLessThan(1e-8);
+      expect(relErr(tip, exact.tipLoad)).toBeLessThan(0.005);
+      expect(relErr(uni, exact.uniform)).toBeLessThan(0.005);
+    });
+  }
+
+  it('pole and arm frame: arm-tip drop and pole-top sway at the default count are within 0.5 % of a 200-segment model', () => {
+    const design = makeDesign({ arms: [testArm({ length_m: 15, section: roundSection(0.36, 0.14, 0.005), rise_rad: 0 })], attachments: [] });
+    const solve = (n: number) => {
+      const model = buildFrame(design, { segmentsPerMember: n });
+      const tipNode = model.elements[model.members.find((m) => m.id === 'A1')!.elements.at(-1)!].j;
+      const topNode = model.elements[model.members.find((m) => m.id === 'pole')!.elements.at(-1)!].j;
+      const d = solveLoads(model, [{ kind: 'nodal', node: tipNode, F_N: [0, 0, -5000], M_Nm: [0, 0, 0], origin: { source: 'test tip load' } }]).displacements;
+      return { drop: -d[tipNode][2], sway: d[topNode][0] };
+    };
+    const fine = solve(200);
+    const dflt = solve(RECOMMENDED_SEGMENTS_PER_MEMBER);
+    expect(fine.drop).toBeGreaterThan(0);
+    expect(relErr(dflt.drop, fine.drop)).toBeLessThan(0.005);
+    expect(relErr(dflt.sway, fine.sway)).toBeLessThan(0.005);
+  });
 });
