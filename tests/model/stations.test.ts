@@ -25,7 +25,7 @@ describe('member stations', () => {
     const st = memberStations('A1', 9, [{ s_m: 8.9995, tag: 'attachment:H1' }, { s_m: 9, tag: 'arm-tip:A1' }, { s_m: 3.0, tag: 'a' }, { s_m: 3.0004, tag: 'b' }], 3);
     expect(st.map((s) => s.s_m)).toEqual([0, 3.0, 6, 9]);
     expect(st[1].tags).toEqual(['a', 'b']);
-    expect(st[3].tags.sort()).toEqual(['arm-tip:A1', 'attachment:H1']);
+    expect([...st[3].tags].sort()).toEqual(['arm-tip:A1', 'attachment:H1']);
   });
   it('memberSectionAt follows the linear taper of the named member', () => {
     const design = makeDesign();
