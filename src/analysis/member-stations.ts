@@ -158,8 +158,18 @@ function pointLoadNear(st: ElementState, x: number): boolean {
 
 const nonZero = (v: readonly number[]): boolean => v.some((c) => c !== 0);
 
-/** Breakpoints where the internal-force polynomials change. */
+const breaksCache = new WeakMap<ElementState, number[]>();
+
+/** Breakpoints where the internal-force polynomials change (cached per element state). */
 function pieceBreaks(st: ElementState): number[] {
+  const cached = breaksCache.get(st);
+  if (cached) return cached;
+  const out = computeBreaks(st);
+  breaksCache.set(st, out);
+  return out;
+}
+
+function computeBreaks(st: ElementState): number[] {
   const L = st.pe.geo.L;
   const xs = [0, L];
   for (const l of st.loads) {
