@@ -16,6 +16,7 @@ import { buildFrame, RECOMMENDED_SEGMENTS_PER_MEMBER } from '../../src/model/bui
 import type { SegmentRule } from '../../src/model/segment-properties.ts';
 import { solveLoads } from '../../src/analysis/index.ts';
 import { elementEnds } from '../../src/model/locate.ts';
+import { segmentConvergence } from '../../src/model/segment-convergence.ts';
 import { makeDesign, polySection, roundSection, testArm, testPole } from './design-factory.ts';
 
 const E = 200e9;
@@ -158,5 +159,20 @@ describe('segment count convergence through the frame analysis', () => {
     expect(fine.drop).toBeGreaterThan(0);
     expect(relErr(dflt.drop, fine.drop)).toBeLessThan(0.005);
     expect(relErr(dflt.sway, fine.sway)).toBeLessThan(0.005);
+  });
+});
+
+describe('segmentConvergence (the evidence printed in the package)', () => {
+  it('reports, per member, the chain against the continuous taper as the test computes them', () => {
+    for (const c of cases) {
+      const design = makeDesign({ pole: testPole({ height_m: c.L, section: c.section }), arms: [], attachments: [], material: { E_Pa: E, G_Pa: 77e9, Fy_Pa: 345e6, density_kgm3: 7850 } });
+      for (const n of [5, RECOMMENDED_SEGMENTS_PER_MEMBER]) {
+        const r = segmentConvergence(design, buildFrame(design, { segmentsPerMember: n }));
+        const expected = chainTip(c, n).tipLoad / exactTip(c).tipLoad - 1;
+        expect(r.members).toHaveLength(1);
+        expect(Math.abs(r.members[0].relativeDifference - expected)).toBeLessThan(1e-8);
+        expect(r.steps[0].result.si).toBe(r.members[0].relativeDifference);
+      }
+    }
   });
 });
