@@ -1,11 +1,15 @@
 // The library API: one input file to a calculation package. Data flows one way:
 // input -> design -> frame model -> loads -> analysis -> checks -> document -> PDF / JSON.
-import { readInputFile } from './input/read-input-file.ts';
-import { loadDesignText } from './input/index.ts';
+import { loadDesignFile } from './input/index.ts';
 import type { LoadedDesign } from './design/design.ts';
+import { analyseDesign } from './analyse-design.ts';
+import type { DesignAnalysis } from './analyse-design.ts';
 import { buildDocument } from './report/sections/build-document.ts';
 import { renderPdf } from './report/pdf/render-pdf.ts';
 import type { DocumentModel } from './report/document.ts';
+import { resultsJson } from './export/results-json.ts';
+import { toolVersion } from './version.ts';
+import { analysisSummaryLines } from './analysis-summary.ts';
 
 export interface BuildOptions {
   readonly env?: Readonly<Record<string, string | undefined>>;
@@ -15,6 +19,7 @@ export interface BuildOptions {
 
 export interface PackageResult {
   readonly loaded: LoadedDesign;
+  readonly analysis: DesignAnalysis;
   readonly document: DocumentModel;
   readonly pdf: Buffer;
   /** The results as JSON text, when asked for. */
@@ -25,8 +30,12 @@ export interface PackageResult {
 }
 
 export async function buildPackage(file: string, opts: BuildOptions = {}): Promise<PackageResult> {
-  const loaded = loadDesignText(readInputFile(file), file, opts.env ?? {});
+  const loaded = loadDesignFile(file, { SOURCE_DATE_EPOCH: opts.env?.SOURCE_DATE_EPOCH });
+  const analysis = analyseDesign(loaded.design, { firstOrder: opts.firstOrder });
   const document = buildDocument(loaded);
   const pdf = await renderPdf(document);
-  return { loaded, document, pdf, json: null, summary: [], checksFail: false };
+  const json = opts.json
+    ? resultsJson({ loaded, toolVersion: toolVersion(), ...analysis, secondOrder: analysis.options.secondOrder })
+    : null;
+  return { loaded, analysis, document, pdf, json, summary: analysisSummaryLines(loaded.design, analysis), checksFail: false };
 }

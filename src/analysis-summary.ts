@@ -1,0 +1,24 @@
+// A few lines for the terminal after `polebook build`: what was analysed and the governing values.
+import type { Design } from './design/design.ts';
+import type { DesignAnalysis } from './analyse-design.ts';
+import { envelope } from './analysis/envelope.ts';
+import { formatQuantity, formatNumber } from './units/units.ts';
+
+export function analysisSummaryLines(design: Design, a: DesignAnalysis): string[] {
+  const q = (si: number, dim: Parameters<typeof formatQuantity>[1]) => formatQuantity(si, dim, design.units);
+  const results = Object.values(a.results);
+  const lines = [
+    `${design.project.structureId}: ${a.model.nodes.length} nodes, ${a.model.elements.length} elements, ${a.cases.length} load cases, ${results.length} combinations, ${a.options.secondOrder ? 'second order (P-delta)' : 'first order'}`,
+  ];
+  const base = envelope(a.results, 'pole', 'Mres');
+  lines.push(`  largest pole moment ${q(base.max.value, 'moment')} at ${q(base.max.s_m, 'length')} under ${base.max.combination}`);
+  const amplified = results.filter((r) => r.baseMoment?.amplification != null);
+  if (a.options.secondOrder && amplified.length > 0) {
+    const worst = amplified.reduce((x, y) => ((y.baseMoment!.amplification ?? 0) > (x.baseMoment!.amplification ?? 0) ? y : x));
+    lines.push(`  largest P-delta amplification of the base moment ${formatNumber(worst.baseMoment!.amplification!, 4)} under ${worst.combination}`);
+  }
+  const worstStatics = Math.max(...results.map((r) => r.statics.relativeResidual));
+  lines.push(`  statics check: largest relative residual ${worstStatics.toExponential(1)}`);
+  if (a.modes.length > 0) lines.push(`  first natural frequency ${formatNumber(a.modes[0]!.frequency_Hz, 3)} Hz`);
+  return lines;
+}
