@@ -16,7 +16,7 @@ import type { EnvelopeComponent, Extreme, MemberStations, Station, StationSide }
 import { toGlobal3 } from './element-geometry.ts';
 import { intensityAt, SNAP_M, type LocalLoad } from './element-loads.ts';
 import type { LoadSet, PreparedElement, PreparedModel } from './frame-system.ts';
-import { addPoly, cubicThrough, CHEB4, extremaOn, multiply } from './polynomial.ts';
+import { addPoly, cubicThrough, CHEB4, evalPoly, extremaOn, multiply, type Poly } from './polynomial.ts';
 import { GAUSS3, localDisplacementAt } from './shape-functions.ts';
 
 export interface ElementState {
@@ -83,31 +83,56 @@ export function internalForcesAt(st: ElementState, x: number, side: StationSide)
 /**
  * Displacement inside the element from its loads with both ends held (the particular solution):
  * EIz v'' = Mz, EIy w'' = -My, EA u' = N of the fixed-fixed element, zero value and slope at end i
- * (and so at end j). The fixed-fixed moments are piecewise cubic, so 3-point Gauss on each piece
- * between load breakpoints integrates (x - t) M(t) exactly.
+ * (and so at end j). The fixed-fixed forces are cubic on each piece between load breakpoints
+ * (fitted once per element), so 3-point Gauss integrates (x - t) M(t) exactly.
  */
 function particularDisplacement(st: ElementState, x: number): [number, number, number] {
-  const fef = st.fixedEnd;
-  if (!fef || x <= 0) return [0, 0, 0];
+  if (!st.fixedEnd || x <= 0) return [0, 0, 0];
   const { el } = st.pe;
-  const held: ElementState = { pe: st.pe, d: ZERO12, f: fef, N: 0, loads: st.loads, fixedEnd: null };
-  const cuts = pieceBreaks(st).filter((c) => c < x - SNAP_M);
-  cuts.push(x);
   let u = 0;
   let v = 0;
   let w = 0;
-  for (let k = 0; k + 1 < cuts.length; k++) {
-    const h = (cuts[k + 1] - cuts[k]) / 2;
+  for (const pc of heldPieces(st)) {
+    if (pc.x0 >= x - SNAP_M) break;
+    const b = Math.min(pc.x1, x);
+    const h = (b - pc.x0) / 2;
     for (let g = 0; g < 3; g++) {
-      const t = cuts[k] + h * (1 + GAUSS3.t[g]);
-      const f = internalForcesAt(held, t, 'both');
+      const t = pc.x0 + h * (1 + GAUSS3.t[g]);
+      const tau = (2 * t - pc.x0 - pc.x1) / (pc.x1 - pc.x0);
       const wt = h * GAUSS3.w[g];
-      u += (wt * f[0]) / (el.E_Pa * el.A_m2);
-      v += (wt * (x - t) * f[5]) / (el.E_Pa * el.Iz_m4);
-      w -= (wt * (x - t) * f[4]) / (el.E_Pa * el.Iy_m4);
+      u += (wt * evalPoly(pc.N, tau)) / (el.E_Pa * el.A_m2);
+      v += (wt * (x - t) * evalPoly(pc.Mz, tau)) / (el.E_Pa * el.Iz_m4);
+      w -= (wt * (x - t) * evalPoly(pc.My, tau)) / (el.E_Pa * el.Iy_m4);
     }
   }
   return [u, v, w];
+}
+
+interface HeldPiece {
+  readonly x0: number;
+  readonly x1: number;
+  readonly N: Poly;
+  readonly My: Poly;
+  readonly Mz: Poly;
+}
+
+const heldCache = new WeakMap<ElementState, HeldPiece[]>();
+
+/** Internal forces of the element with both ends held, as cubics on each piece. */
+function heldPieces(st: ElementState): HeldPiece[] {
+  const cached = heldCache.get(st);
+  if (cached) return cached;
+  const held: ElementState = { pe: st.pe, d: ZERO12, f: st.fixedEnd ?? ZERO12, N: 0, loads: st.loads, fixedEnd: null };
+  const breaks = pieceBreaks(st);
+  const out: HeldPiece[] = [];
+  for (let k = 0; k + 1 < breaks.length; k++) {
+    const x0 = breaks[k];
+    const x1 = breaks[k + 1];
+    const samples = CHEB4.map((t) => internalForcesAt(held, x0 + ((t + 1) * (x1 - x0)) / 2, 'both'));
+    out.push({ x0, x1, N: cubicThrough(samples.map((q) => q[0])), My: cubicThrough(samples.map((q) => q[4])), Mz: cubicThrough(samples.map((q) => q[5])) });
+  }
+  heldCache.set(st, out);
+  return out;
 }
 
 const ZERO12 = new Float64Array(12);
