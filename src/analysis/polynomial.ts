@@ -1,6 +1,6 @@
 // Small polynomial tools for exact extremes: coefficients low to high, variable t on [-1, 1].
 
-export type Poly = number[];
+export type Poly = ArrayLike<number>;
 
 export function evalPoly(c: Poly, t: number): number {
   let v = 0;
@@ -8,20 +8,15 @@ export function evalPoly(c: Poly, t: number): number {
   return v;
 }
 
-export function derivative(c: Poly): Poly {
-  return c.slice(1).map((v, k) => v * (k + 1));
-}
-
-export function multiply(a: Poly, b: Poly): Poly {
-  const out = new Array<number>(a.length + b.length - 1).fill(0);
-  a.forEach((x, i) => b.forEach((y, j) => (out[i + j] += x * y)));
+export function derivative(c: Poly): number[] {
+  const out = new Array<number>(Math.max(c.length - 1, 0));
+  for (let k = 1; k < c.length; k++) out[k - 1] = c[k] * k;
   return out;
 }
 
-export function addPoly(a: Poly, b: Poly): Poly {
-  const out = new Array<number>(Math.max(a.length, b.length)).fill(0);
-  a.forEach((x, i) => (out[i] += x));
-  b.forEach((x, i) => (out[i] += x));
+export function multiply(a: Poly, b: Poly): number[] {
+  const out = new Array<number>(a.length + b.length - 1).fill(0);
+  for (let i = 0; i < a.length; i++) for (let j = 0; j < b.length; j++) out[i + j] += a[i] * b[j];
   return out;
 }
 
@@ -29,8 +24,8 @@ export function addPoly(a: Poly, b: Poly): Poly {
 export const CHEB4 = [0, 1, 2, 3].map((k) => Math.cos(((2 * k + 1) * Math.PI) / 8));
 
 /** Lagrange basis polynomials on CHEB4, expanded: LAGRANGE[k][j] is the t^j coefficient of basis k. */
-const LAGRANGE: readonly Poly[] = CHEB4.map((tk, k) => {
-  let basis: Poly = [1];
+const LAGRANGE: readonly number[][] = CHEB4.map((tk, k) => {
+  let basis: number[] = [1];
   let denom = 1;
   CHEB4.forEach((tm, m) => {
     if (m === k) return;
@@ -39,79 +34,160 @@ const LAGRANGE: readonly Poly[] = CHEB4.map((tk, k) => {
   });
   return basis.map((v) => v / denom);
 });
+const LAG = Float64Array.from(LAGRANGE.flat());
 
 /** Coefficients of the cubic through (CHEB4[k], y[k]). */
-export function cubicThrough(y: readonly number[]): Poly {
-  const out = [0, 0, 0, 0];
-  for (let k = 0; k < 4; k++) for (let j = 0; j < 4; j++) out[j] += y[k] * LAGRANGE[k][j];
-  return out;
+export function cubicThrough(y: readonly number[]): number[] {
+  const out = new Float64Array(4);
+  cubicThroughInto(y, out, 0);
+  return Array.from(out);
 }
 
-/** Real roots of c inside (lo, hi): the roots of c' split the interval into monotone pieces,
- * each searched by bisection; exact to round-off for any degree. */
+/** cubicThrough written into out[off .. off+3]. */
+export function cubicThroughInto(y: ArrayLike<number>, out: Float64Array, off: number): void {
+  let c0 = 0;
+  let c1 = 0;
+  let c2 = 0;
+  let c3 = 0;
+  for (let k = 0; k < 4; k++) {
+    const yk = y[k];
+    c0 += yk * LAG[4 * k];
+    c1 += yk * LAG[4 * k + 1];
+    c2 += yk * LAG[4 * k + 2];
+    c3 += yk * LAG[4 * k + 3];
+  }
+  out[off] = c0;
+  out[off + 1] = c1;
+  out[off + 2] = c2;
+  out[off + 3] = c3;
+}
+
+/**
+ * Real roots of c inside (lo, hi): the roots of c' split the interval into monotone pieces; each
+ * piece with a sign change holds one root, found by Newton's method kept inside the shrinking
+ * bracket (a bisection step whenever Newton would leave it); exact to round-off for any degree.
+ */
 export function rootsIn(c: Poly, lo: number, hi: number): number[] {
   let deg = c.length - 1;
-  const scale = Math.max(...c.map(Math.abs));
+  let scale = 0;
+  for (let k = 0; k < c.length; k++) scale = Math.max(scale, Math.abs(c[k]));
   while (deg > 0 && Math.abs(c[deg]) <= 1e-14 * scale) deg--;
-  const p = c.slice(0, deg + 1);
   if (deg < 1) return [];
+  const p = Array.prototype.slice.call(c, 0, deg + 1) as number[];
   if (deg === 1) {
     const r = -p[0] / p[1];
     return r > lo && r < hi ? [r] : [];
   }
-  const cuts = [lo, ...rootsIn(derivative(p), lo, hi), hi];
+  const inner = rootsIn(derivative(p), lo, hi);
   const roots: number[] = [];
-  for (let k = 0; k + 1 < cuts.length; k++) {
-    let a = cuts[k];
-    let b = cuts[k + 1];
-    let fa = evalPoly(p, a);
+  let a = lo;
+  let fa = evalPoly(p, a);
+  for (let k = 0; k <= inner.length; k++) {
+    const b = k < inner.length ? inner[k] : hi;
     const fb = evalPoly(p, b);
     if (fa === 0) {
       if (a > lo) roots.push(a);
-      continue;
+    } else if (fb === 0) {
+      if (b < hi) roots.push(b);
+    } else if (fa * fb < 0) {
+      const r = bracketedNewton(p, a, fa, b);
+      if (r > lo && r < hi) roots.push(r);
     }
-    if (fa * fb > 0) continue;
-    for (let it = 0; it < 200 && b - a > 1e-15 * (1 + Math.abs(a)); it++) {
-      const m = (a + b) / 2;
-      const fm = evalPoly(p, m);
-      if (fm * fa > 0) {
-        a = m;
-        fa = fm;
-      } else b = m;
-    }
-    const r = (a + b) / 2;
-    if (r > lo && r < hi) roots.push(r);
+    a = b;
+    fa = fb;
   }
   return roots;
 }
 
+/** The root of p in (a, b), where p is monotone and p(a) = fa has the opposite sign of p(b). */
+function bracketedNewton(p: number[], a: number, fa: number, b: number): number {
+  let x = (a + b) / 2;
+  for (let it = 0; it < 200; it++) {
+    let v = 0;
+    let dv = 0;
+    for (let k = p.length - 1; k >= 0; k--) {
+      dv = dv * x + v;
+      v = v * x + p[k];
+    }
+    if (v === 0) return x;
+    if (v * fa > 0) {
+      a = x;
+      fa = v;
+    } else b = x;
+    let next = x - v / dv;
+    if (!(next > a && next < b)) next = (a + b) / 2;
+    if (Math.abs(next - x) <= 1e-15 * (1 + Math.abs(x)) || b - a <= 1e-15 * (1 + Math.abs(a))) return next;
+    x = next;
+  }
+  return x;
+}
+
+export interface Extrema {
+  max: number;
+  tMax: number;
+  min: number;
+  tMin: number;
+}
+
 /** Max and min of c on [-1, 1] with their t. */
-export function extremaOn(c: Poly): { max: number; tMax: number; min: number; tMin: number } {
-  const ts = [-1, 1, ...(c.length <= 4 ? quadraticRoots(derivative(c)) : rootsIn(derivative(c), -1, 1))];
+export function extremaOn(c: Poly): Extrema {
+  const out: Extrema = { max: 0, tMax: 0, min: 0, tMin: 0 };
+  extremaInto(c, out);
+  return out;
+}
+
+const quad = new Float64Array(2);
+
+/** extremaOn written into out (for the hot loop). Candidates: the ends, then the stationary points. */
+export function extremaInto(c: Poly, out: Extrema): void {
   let max = -Infinity;
   let min = Infinity;
   let tMax = -1;
   let tMin = -1;
-  for (const t of ts) {
+  const visit = (t: number): void => {
     const v = evalPoly(c, t);
-    if (v > max) [max, tMax] = [v, t];
-    if (v < min) [min, tMin] = [v, t];
+    if (v > max) {
+      max = v;
+      tMax = t;
+    }
+    if (v < min) {
+      min = v;
+      tMin = t;
+    }
+  };
+  visit(-1);
+  visit(1);
+  if (c.length <= 4) {
+    const n = quadraticRoots(c.length > 1 ? c[1] : 0, c.length > 2 ? c[2] * 2 : 0, c.length > 3 ? c[3] * 3 : 0, quad);
+    for (let k = 0; k < n; k++) visit(quad[k]);
+  } else {
+    for (const t of rootsIn(derivative(c), -1, 1)) visit(t);
   }
-  return { max, tMax, min, tMin };
+  out.max = max;
+  out.tMax = tMax;
+  out.min = min;
+  out.tMin = tMin;
 }
 
-/** Real roots in (-1, 1) of a polynomial of degree <= 2 (closed form, stable variant). */
-function quadraticRoots(c: Poly): number[] {
-  const [c0 = 0, c1 = 0, c2 = 0] = c;
+/** Real roots in (-1, 1) of c0 + c1 t + c2 t² (closed form, stable variant), into out; returns how many. */
+function quadraticRoots(c0: number, c1: number, c2: number, out: Float64Array): number {
   const scale = Math.max(Math.abs(c0), Math.abs(c1), Math.abs(c2));
-  if (scale === 0) return [];
-  let roots: number[];
-  if (Math.abs(c2) <= 1e-14 * scale) roots = Math.abs(c1) <= 1e-14 * scale ? [] : [-c0 / c1];
-  else {
+  if (scale === 0) return 0;
+  let n = 0;
+  const keep = (t: number): void => {
+    if (t > -1 && t < 1) out[n++] = t;
+  };
+  if (Math.abs(c2) <= 1e-14 * scale) {
+    if (!(Math.abs(c1) <= 1e-14 * scale)) keep(-c0 / c1);
+  } else {
     const disc = c1 * c1 - 4 * c2 * c0;
-    if (disc < 0) return [];
+    if (disc < 0) return 0;
     const q = -0.5 * (c1 + Math.sign(c1 || 1) * Math.sqrt(disc));
-    roots = q === 0 ? [0] : [q / c2, c0 / q];
+    if (q === 0) keep(0);
+    else {
+      keep(q / c2);
+      keep(c0 / q);
+    }
   }
-  return roots.filter((t) => t > -1 && t < 1);
+  return n;
 }

@@ -1,0 +1,212 @@
+// Internal forces and displacements at a point of one element, written into caller-owned arrays
+// (no allocation: they run for every station and every polynomial sample of every combination).
+//
+// On an element, the internal resultant at x comes from the statics of the segment [0, x]:
+//   forces  S(x) = -f_i - (loads on [0, x])
+//   moments M(x) = -(M_i + (r_i - r_x) x f_i + moments of the loads about the cut)
+// where f_i is the end force on the element at end i. In a second-order analysis the lever
+// arm of the axial force includes the displaced shape, r_i - r_x = (-x, -(v(x)-v_i), -(w(x)-w_i)),
+// with v, w the Hermite cubics and the axial force N of the geometric stiffness; this is the
+// P-delta moment N (v(x) - v_i) that the consistent geometric stiffness carries, so the
+// statics at x = L reproduce the end forces at end j exactly.
+// Displacements: Hermite cubic (transverse) and linear (axial) interpolation of the end
+// displacements, plus the particular solution of the element's own loads with both ends held
+// (first order; in a second-order analysis that small in-element part is not amplified).
+import type { StationSide } from './analysis-types.ts';
+import { SNAP_M, type LocalLoad } from './element-loads.ts';
+import type { PreparedElement } from './frame-system.ts';
+import { CHEB4, cubicThroughInto } from './polynomial.ts';
+import { GAUSS3 } from './shape-functions.ts';
+
+export interface ElementState {
+  readonly pe: PreparedElement;
+  /** Local end displacements. */
+  readonly d: Float64Array;
+  /** Local end forces on the element. */
+  readonly f: Float64Array;
+  /** Axial force used in the geometric stiffness (0 for first order). */
+  readonly N: number;
+  readonly loads: readonly LocalLoad[];
+  /** Fixed-end forces of the element loads (local), null when unloaded. */
+  readonly fixedEnd: Float64Array | null;
+}
+
+/** 2-point Gauss abscissae: exact for a linear load and for (xi - x) times it. */
+const GAUSS2 = [-1 / Math.sqrt(3), 1 / Math.sqrt(3)] as const;
+
+/** [N, Vy, Vz, T, My, Mz] at x into out; point loads at x count only on the 'right' side. */
+export function internalForcesInto(st: ElementState, x: number, side: StationSide, out: Float64Array): void {
+  const { d, f, N, loads } = st;
+  const L = st.pe.geo.L;
+  let F0 = -f[0];
+  let F1 = -f[1];
+  let F2 = -f[2];
+  let dv = 0;
+  let dw = 0;
+  if (N !== 0) {
+    // Hermite cubics (shape-functions.ts), the same arithmetic inline
+    const s = x / L;
+    const s2 = s * s;
+    const s3 = s2 * s;
+    const n1 = 1 - 3 * s2 + 2 * s3;
+    const n2 = L * (s - 2 * s2 + s3);
+    const n3 = 3 * s2 - 2 * s3;
+    const n4 = L * (s3 - s2);
+    dv = n1 * d[1] + n2 * d[5] + n3 * d[7] + n4 * d[11] - d[1];
+    dw = n1 * d[2] - n2 * d[4] + n3 * d[8] - n4 * d[10] - d[2];
+  }
+  // M(x) = -(M_i + c_i + load moments), c_i = (r_i - r_x) x f_i with the axial force N of Kg
+  let M0 = -f[3];
+  let M1 = -(f[4] + x * f[2] + dw * N);
+  let M2 = -(f[5] - x * f[1] - dv * N);
+  for (let k = 0; k < loads.length; k++) {
+    const l = loads[k];
+    if (l.kind === 'distributed') {
+      const c = Math.min(l.b, x);
+      if (c <= l.a) continue;
+      const h = (c - l.a) / 2;
+      for (let g = 0; g < 2; g++) {
+        const xi = l.a + h * (1 + GAUSS2[g]);
+        // intensityAt (element-loads.ts), inline
+        const t = l.b > l.a ? (xi - l.a) / (l.b - l.a) : 0;
+        const q0 = l.qA[0] + (l.qB[0] - l.qA[0]) * t;
+        const q1 = l.qA[1] + (l.qB[1] - l.qA[1]) * t;
+        const q2 = l.qA[2] + (l.qB[2] - l.qA[2]) * t;
+        const lever = xi - x;
+        F0 -= h * q0;
+        F1 -= h * q1;
+        F2 -= h * q2;
+        M1 -= h * -lever * q2;
+        M2 -= h * lever * q1;
+      }
+      continue;
+    }
+    const inside = l.a < x - SNAP_M || (Math.abs(l.a - x) <= SNAP_M && side === 'right');
+    if (!inside) continue;
+    if (l.kind === 'force') {
+      const lever = l.a - x;
+      F0 -= l.F[0];
+      F1 -= l.F[1];
+      F2 -= l.F[2];
+      M1 -= -lever * l.F[2];
+      M2 -= lever * l.F[1];
+    } else {
+      M0 -= l.M[0];
+      M1 -= l.M[1];
+      M2 -= l.M[2];
+    }
+  }
+  out[0] = F0;
+  out[1] = F1;
+  out[2] = F2;
+  out[3] = M0;
+  out[4] = M1;
+  out[5] = M2;
+}
+
+/** Local displacement [u, v, w] at x from the end displacements (Hermite and linear), into out. */
+export function endInterpolationInto(d: ArrayLike<number>, x: number, L: number, out: Float64Array): void {
+  const s = x / L;
+  const s2 = s * s;
+  const s3 = s2 * s;
+  const n1 = 1 - 3 * s2 + 2 * s3;
+  const n2 = L * (s - 2 * s2 + s3);
+  const n3 = 3 * s2 - 2 * s3;
+  const n4 = L * (s3 - s2);
+  out[0] = (1 - s) * d[0] + s * d[6];
+  out[1] = n1 * d[1] + n2 * d[5] + n3 * d[7] + n4 * d[11];
+  out[2] = n1 * d[2] - n2 * d[4] + n3 * d[8] - n4 * d[10];
+}
+
+/** Breakpoints where the internal-force polynomials change: element ends and load starts/ends, snapped. */
+export function pieceBreaks(st: ElementState): number[] {
+  const L = st.pe.geo.L;
+  const xs = [0, L];
+  for (const l of st.loads) {
+    if (l.kind === 'distributed') xs.push(l.a, l.b);
+    else xs.push(l.a);
+  }
+  xs.sort((a, b) => a - b);
+  return xs.filter((x, k) => k === 0 || x - xs[k - 1] > SNAP_M);
+}
+
+/** Internal forces of one element with both ends held, as cubics in t on each piece [x0, x1]. */
+export interface HeldPieces {
+  readonly count: number;
+  readonly x0: Float64Array;
+  readonly x1: Float64Array;
+  /** 4 coefficients per piece (low to high) of N, My and Mz. */
+  readonly N: Float64Array;
+  readonly My: Float64Array;
+  readonly Mz: Float64Array;
+}
+
+const ZERO12 = new Float64Array(12);
+const sample = new Float64Array(6);
+const ys = [new Float64Array(4), new Float64Array(4), new Float64Array(4)];
+
+/** Fits the held-ends internal forces on each piece between load breakpoints (exact: they are cubic). */
+export function heldPieces(st: ElementState, breaks: readonly number[]): HeldPieces | null {
+  if (!st.fixedEnd) return null;
+  const held: ElementState = { pe: st.pe, d: ZERO12, f: st.fixedEnd, N: 0, loads: st.loads, fixedEnd: null };
+  const count = breaks.length - 1;
+  const out: HeldPieces = {
+    count,
+    x0: new Float64Array(count),
+    x1: new Float64Array(count),
+    N: new Float64Array(4 * count),
+    My: new Float64Array(4 * count),
+    Mz: new Float64Array(4 * count),
+  };
+  for (let k = 0; k < count; k++) {
+    const x0 = breaks[k];
+    const x1 = breaks[k + 1];
+    for (let p = 0; p < 4; p++) {
+      internalForcesInto(held, x0 + ((CHEB4[p] + 1) * (x1 - x0)) / 2, 'both', sample);
+      ys[0][p] = sample[0];
+      ys[1][p] = sample[4];
+      ys[2][p] = sample[5];
+    }
+    out.x0[k] = x0;
+    out.x1[k] = x1;
+    cubicThroughInto(ys[0], out.N, 4 * k);
+    cubicThroughInto(ys[1], out.My, 4 * k);
+    cubicThroughInto(ys[2], out.Mz, 4 * k);
+  }
+  return out;
+}
+
+const cubicAt = (c: Float64Array, off: number, t: number): number => ((c[off + 3] * t + c[off + 2]) * t + c[off + 1]) * t + c[off];
+
+/**
+ * Displacement inside the element from its loads with both ends held (the particular solution):
+ * EIz v'' = Mz, EIy w'' = -My, EA u' = N of the fixed-fixed element, zero value and slope at end i
+ * (and so at end j). The held forces are cubic on each piece, so 3-point Gauss integrates
+ * (x - t) M(t) exactly. Adds [u, v, w] into out.
+ */
+export function addParticularDisplacement(st: ElementState, held: HeldPieces | null, x: number, out: Float64Array): void {
+  if (!held || x <= 0) return;
+  const { el } = st.pe;
+  let u = 0;
+  let v = 0;
+  let w = 0;
+  for (let k = 0; k < held.count; k++) {
+    const x0 = held.x0[k];
+    const x1 = held.x1[k];
+    if (x0 >= x - SNAP_M) break;
+    const b = Math.min(x1, x);
+    const h = (b - x0) / 2;
+    for (let g = 0; g < 3; g++) {
+      const t = x0 + h * (1 + GAUSS3.t[g]);
+      const tau = (2 * t - x0 - x1) / (x1 - x0);
+      const wt = h * GAUSS3.w[g];
+      u += (wt * cubicAt(held.N, 4 * k, tau)) / (el.E_Pa * el.A_m2);
+      v += (wt * (x - t) * cubicAt(held.Mz, 4 * k, tau)) / (el.E_Pa * el.Iz_m4);
+      w -= (wt * (x - t) * cubicAt(held.My, 4 * k, tau)) / (el.E_Pa * el.Iy_m4);
+    }
+  }
+  out[0] += u;
+  out[1] += v;
+  out[2] += w;
+}
+
