@@ -19,7 +19,7 @@ import {
   assemble,
   axialForces,
   buildLoadSet,
-  elementEndForces,
+  endForcesFromLocal,
   expand,
   factorOrThrow,
   loadVector,
@@ -28,6 +28,7 @@ import {
   reactions,
   type FactoredLoad,
   type LoadSet,
+  type PreparedElement,
   type PreparedModel,
 } from './frame-system.ts';
 import { memberStations, type ElementState } from './member-stations.ts';
@@ -68,21 +69,29 @@ interface State {
   readonly U: Float64Array;
   /** Axial force used in the geometric stiffness per element (zeros for first order). */
   readonly Nkg: Float64Array;
+  /** Local end displacements and end forces per element (only the elements asked for). */
+  readonly d: Float64Array[];
   readonly endForces: Float64Array[];
 }
 
-function stateFrom(prep: PreparedModel, ls: LoadSet, U: Float64Array, Nkg: Float64Array): State {
-  const endForces = prep.elements.map((pe, e) => elementEndForces(pe, U, ls.fixedEnd[e], Nkg[e]));
-  return { U, Nkg, endForces };
+function stateFrom(prep: PreparedModel, ls: LoadSet, U: Float64Array, Nkg: Float64Array, only?: readonly PreparedElement[]): State {
+  const d: Float64Array[] = new Array<Float64Array>(prep.elements.length);
+  const endForces: Float64Array[] = new Array<Float64Array>(prep.elements.length);
+  for (const pe of only ?? prep.elements) {
+    const e = pe.el.id;
+    d[e] = localEndDisplacements(pe, U);
+    endForces[e] = endForcesFromLocal(pe, d[e], ls.fixedEnd[e], Nkg[e]);
+  }
+  return { U, Nkg, d, endForces };
 }
 
+/** Largest resultant moment at a supported element end; `first` needs only the elements at supports. */
 function baseMoment(prep: PreparedModel, first: State, final: State): BaseMoment | null {
   let best: BaseMoment | null = null;
-  const supported = new Set(prep.model.supports.map((s) => s.node));
-  for (const pe of prep.elements) {
+  for (const pe of prep.atSupports) {
     for (const end of [0, 6]) {
       const node = end === 0 ? pe.el.i : pe.el.j;
-      if (!supported.has(node)) continue;
+      if (!prep.supported[node]) continue;
       const m = (s: State): number => Math.hypot(s.endForces[pe.el.id][end + 4], s.endForces[pe.el.id][end + 5]);
       const f = m(first);
       const g = m(final);
@@ -98,7 +107,7 @@ function solution(prep: PreparedModel, ls: LoadSet, st: State, spacing_m: number
   const { model } = prep;
   const states: ElementState[] = prep.elements.map((pe, e) => ({
     pe,
-    d: localEndDisplacements(pe, st.U),
+    d: st.d[e],
     f: st.endForces[e],
     N: st.Nkg[e],
     loads: ls.local[e],
@@ -128,7 +137,8 @@ function runCombination(solver: Solver, loads: readonly FactoredLoad[], opts: An
   const F = loadVector(prep, ls);
   const zeros = new Float64Array(prep.elements.length);
   const u1 = linearFactor(solver, id).solve(F);
-  const first = stateFrom(prep, ls, expand(prep, u1), zeros);
+  // In second order the first-order state serves only the base-moment amplification.
+  const first = stateFrom(prep, ls, expand(prep, u1), zeros, opts.secondOrder ? prep.atSupports : undefined);
   let final = first;
   let iterations = 1;
   let change = 0;

@@ -39,6 +39,10 @@ export interface PreparedModel {
   readonly dofs: DofMap;
   /** Number of elements attached to each node. */
   readonly degree: Int32Array;
+  /** 1 for a node with a support. */
+  readonly supported: Uint8Array;
+  /** Elements with an end at a support (in element order): the only ones reactions need. */
+  readonly atSupports: readonly PreparedElement[];
 }
 
 /** Rejects numbers that would otherwise flow silently into wrong results (NaN, zero stiffness). */
@@ -87,7 +91,10 @@ export function prepareModel(model: FrameModel): PreparedModel {
     degree[el.i]++;
     degree[el.j]++;
   }
-  return { model, elements, dofs: dofMap, degree };
+  const supported = new Uint8Array(model.nodes.length);
+  for (const s of model.supports) supported[s.node] = 1;
+  const atSupports = elements.filter((pe) => supported[pe.el.i] || supported[pe.el.j]);
+  return { model, elements, dofs: dofMap, degree, supported, atSupports };
 }
 
 /** Loads of one analysis, already multiplied by their combination factors. */
@@ -128,7 +135,9 @@ export function buildLoadSet(prep: PreparedModel, loads: readonly FactoredLoad[]
 
 function addNodal(nodal: Float64Array, l: NodalLoad, factor: number, model: FrameModel): void {
   if (!model.nodes[l.node]) throw new Error(`load '${l.origin.source}' names node ${l.node}, which does not exist`);
-  if (![...l.F_N, ...l.M_Nm].every(Number.isFinite)) throw new Error(`load '${l.origin.source}' at node ${l.node} is not a number`);
+  for (let c = 0; c < 3; c++) {
+    if (!Number.isFinite(l.F_N[c]) || !Number.isFinite(l.M_Nm[c])) throw new Error(`load '${l.origin.source}' at node ${l.node} is not a number`);
+  }
   for (let c = 0; c < 3; c++) {
     nodal[l.node * 6 + c] += factor * l.F_N[c];
     nodal[l.node * 6 + 3 + c] += factor * l.M_Nm[c];
@@ -237,7 +246,11 @@ function endToLocal(R: Float64Array, U: ArrayLike<number>, n: number, r: readonl
 
 /** End forces on the element by the nodes, local: (k + kg(N)) d + f_fixed. */
 export function elementEndForces(pe: PreparedElement, U: ArrayLike<number>, fef: Float64Array | null, N: number): Float64Array {
-  const d = localEndDisplacements(pe, U);
+  return endForcesFromLocal(pe, localEndDisplacements(pe, U), fef, N);
+}
+
+/** elementEndForces from the local end displacements d. */
+export function endForcesFromLocal(pe: PreparedElement, d: Float64Array, fef: Float64Array | null, N: number): Float64Array {
   const f = mulVec12(pe.kLocal, d);
   if (N !== 0) {
     const g = mulVec12(pe.kgUnitLocal, d);
@@ -249,23 +262,42 @@ export function elementEndForces(pe: PreparedElement, U: ArrayLike<number>, fef:
 
 /** Mean axial force (tension +) of each element from its elastic end forces, (f_j,x - f_i,x) / 2. */
 export function axialForces(prep: PreparedModel, U: ArrayLike<number>, ls: LoadSet): Float64Array {
-  return Float64Array.from(prep.elements, (pe, e) => {
-    const d = localEndDisplacements(pe, U);
+  const out = new Float64Array(prep.elements.length);
+  for (let e = 0; e < out.length; e++) {
+    const pe = prep.elements[e];
+    const R = pe.geo.R;
+    const di = axialEndDisplacement(R, U, pe.el.i * 6, pe.el.offsetI_m);
+    const dj = axialEndDisplacement(R, U, pe.el.j * 6, pe.el.offsetJ_m);
     const EA_L = (pe.el.E_Pa * pe.el.A_m2) / pe.geo.L;
     const fef = ls.fixedEnd[e];
-    const fi = EA_L * (d[0] - d[6]) + (fef ? fef[0] : 0);
-    const fj = EA_L * (d[6] - d[0]) + (fef ? fef[6] : 0);
-    return (fj - fi) / 2;
-  });
+    const fi = EA_L * (di - dj) + (fef ? fef[0] : 0);
+    const fj = EA_L * (dj - di) + (fef ? fef[6] : 0);
+    out[e] = (fj - fi) / 2;
+  }
+  return out;
 }
 
-/** Reactions by the supports on the structure, global: node equilibrium at fixed dofs, -k u at springs. */
-export function reactions(prep: PreparedModel, U: ArrayLike<number>, ls: LoadSet, endForces: readonly Float64Array[]): Reaction[] {
+/** The local-x component of endToLocal (the same arithmetic). */
+function axialEndDisplacement(R: Float64Array, U: ArrayLike<number>, n: number, r: readonly number[]): number {
+  const tx = U[n + 3];
+  const ty = U[n + 4];
+  const tz = U[n + 5];
+  const ux = U[n] + ty * r[2] - tz * r[1];
+  const uy = U[n + 1] + tz * r[0] - tx * r[2];
+  const uz = U[n + 2] + tx * r[1] - ty * r[0];
+  return R[0] * ux + R[1] * uy + R[2] * uz;
+}
+
+/** Reactions by the supports on the structure, global: node equilibrium at fixed dofs, -k u at springs.
+ * Only elements with an end at a support contribute to a support node, so only their end forces are read. */
+export function reactions(prep: PreparedModel, U: ArrayLike<number>, ls: LoadSet, endForces: readonly (Float64Array | undefined)[]): Reaction[] {
   const nodeForce = new Float64Array(prep.model.nodes.length * 6);
-  prep.elements.forEach((pe, e) => {
-    const g = mulTVec12(pe.T, endForces[e]);
+  for (const pe of prep.atSupports) {
+    const f = endForces[pe.el.id];
+    if (!f) throw new Error(`end forces of element ${pe.el.id} (at a support) were not computed`);
+    const g = mulTVec12(pe.T, f);
     for (let k = 0; k < 12; k++) nodeForce[pe.dofs[k]] += g[k];
-  });
+  }
   return prep.model.supports.map((s): Reaction => {
     const force = [0, 0, 0, 0, 0, 0];
     for (let c = 0; c < 6; c++) {

@@ -3,11 +3,12 @@
 // displaced positions, so the check also shows how well the P-delta equilibrium is met.
 import type { Vec3 } from '../model/frame.ts';
 import type { Reaction, StaticsCheck } from './analysis-types.ts';
-import { cross, toGlobal3 } from './element-geometry.ts';
+import { cross } from './element-geometry.ts';
 import { intensityAt } from './element-loads.ts';
 import type { LoadSet, PreparedModel } from './frame-system.ts';
 import type { ElementState } from './member-stations.ts';
-import { GAUSS3, localDisplacementAt } from './shape-functions.ts';
+import { GAUSS3 } from './shape-functions.ts';
+import { endInterpolationInto } from './internal-forces.ts';
 
 type V3 = [number, number, number];
 
@@ -23,34 +24,55 @@ export function staticsCheck(
   const M: V3 = [0, 0, 0];
   let sumF = 0;
   let sumM = 0;
-  const apply = (p: Vec3, force: Vec3, moment: Vec3): void => {
-    const m = cross(p, force);
-    for (let c = 0; c < 3; c++) {
-      F[c] += force[c];
-      M[c] += m[c] + moment[c];
-    }
-    sumF += Math.hypot(...force);
-    sumM += Math.hypot(m[0] + moment[0], m[1] + moment[1], m[2] + moment[2]);
+  // A force (f0, f1, f2) and a moment (m0, m1, m2) at the point (p0, p1, p2); scalars, for speed.
+  const apply = (p0: number, p1: number, p2: number, f0: number, f1: number, f2: number, m0: number, m1: number, m2: number): void => {
+    const c0 = p1 * f2 - p2 * f1;
+    const c1 = p2 * f0 - p0 * f2;
+    const c2 = p0 * f1 - p1 * f0;
+    F[0] += f0;
+    F[1] += f1;
+    F[2] += f2;
+    M[0] += c0 + m0;
+    M[1] += c1 + m1;
+    M[2] += c2 + m2;
+    sumF += Math.hypot(f0, f1, f2);
+    sumM += Math.hypot(c0 + m0, c1 + m1, c2 + m2);
   };
   const nodePos = (n: number): Vec3 => {
     const x = prep.model.nodes[n].xyz_m;
     return deformed ? [x[0] + U[n * 6], x[1] + U[n * 6 + 1], x[2] + U[n * 6 + 2]] : x;
   };
-  prep.model.nodes.forEach((_, n) => {
-    const f: Vec3 = [ls.nodal[n * 6], ls.nodal[n * 6 + 1], ls.nodal[n * 6 + 2]];
-    const m: Vec3 = [ls.nodal[n * 6 + 3], ls.nodal[n * 6 + 4], ls.nodal[n * 6 + 5]];
-    if (f.some((v) => v !== 0) || m.some((v) => v !== 0)) apply(nodePos(n), f, m);
-  });
-  states.forEach((st) => {
+  const nodal = ls.nodal;
+  for (let n = 0; n < prep.model.nodes.length; n++) {
+    const o = n * 6;
+    if (nodal[o] !== 0 || nodal[o + 1] !== 0 || nodal[o + 2] !== 0 || nodal[o + 3] !== 0 || nodal[o + 4] !== 0 || nodal[o + 5] !== 0) {
+      const p = nodePos(n);
+      apply(p[0], p[1], p[2], nodal[o], nodal[o + 1], nodal[o + 2], nodal[o + 3], nodal[o + 4], nodal[o + 5]);
+    }
+  }
+  const u = new Float64Array(3);
+  const pt = new Float64Array(3);
+  for (const st of states) {
     const { R, endI, L } = st.pe.geo;
-    const pointAt = (x: number): Vec3 => {
-      const ex = [R[0], R[1], R[2]];
-      const p: V3 = [endI[0] + x * ex[0], endI[1] + x * ex[1], endI[2] + x * ex[2]];
+    const pointAt = (x: number): void => {
+      pt[0] = endI[0] + x * R[0];
+      pt[1] = endI[1] + x * R[1];
+      pt[2] = endI[2] + x * R[2];
       if (deformed) {
-        const u = toGlobal3(R, localDisplacementAt(st.d, x, L));
-        for (let c = 0; c < 3; c++) p[c] += u[c];
+        endInterpolationInto(st.d, x, L, u);
+        pt[0] += R[0] * u[0] + R[3] * u[1] + R[6] * u[2];
+        pt[1] += R[1] * u[0] + R[4] * u[1] + R[7] * u[2];
+        pt[2] += R[2] * u[0] + R[5] * u[1] + R[8] * u[2];
       }
-      return p;
+    };
+    // global = R^T local (toGlobal3), inline
+    const applyLocal = (x: number, q0: number, q1: number, q2: number, moment: boolean): void => {
+      pointAt(x);
+      const g0 = R[0] * q0 + R[3] * q1 + R[6] * q2;
+      const g1 = R[1] * q0 + R[4] * q1 + R[7] * q2;
+      const g2 = R[2] * q0 + R[5] * q1 + R[8] * q2;
+      if (moment) apply(pt[0], pt[1], pt[2], 0, 0, 0, g0, g1, g2);
+      else apply(pt[0], pt[1], pt[2], g0, g1, g2, 0, 0, 0);
     };
     for (const l of st.loads) {
       if (l.kind === 'distributed') {
@@ -61,12 +83,12 @@ export function staticsCheck(
           const x = l.a + h * (1 + GAUSS3.t[g]);
           const q = intensityAt(l, x);
           const w = h * GAUSS3.w[g];
-          apply(pointAt(x), toGlobal3(R, [q[0] * w, q[1] * w, q[2] * w]), [0, 0, 0]);
+          applyLocal(x, q[0] * w, q[1] * w, q[2] * w, false);
         }
-      } else if (l.kind === 'force') apply(pointAt(l.a), toGlobal3(R, l.F), [0, 0, 0]);
-      else apply(pointAt(l.a), [0, 0, 0], toGlobal3(R, l.M));
+      } else if (l.kind === 'force') applyLocal(l.a, l.F[0], l.F[1], l.F[2], false);
+      else applyLocal(l.a, l.M[0], l.M[1], l.M[2], true);
     }
-  });
+  }
   const RF: V3 = [0, 0, 0];
   const RM: V3 = [0, 0, 0];
   for (const r of reactions) {
