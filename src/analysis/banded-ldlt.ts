@@ -105,7 +105,8 @@ export class BandedMatrix {
     if (!this.factored) throw new Error('solve before factor');
     const { n, bw, data } = this;
     const w = bw + 1;
-    const x = Float64Array.from(b);
+    const x = new Float64Array(n);
+    for (let k = 0; k < n; k++) x[k] = b[k];
     for (let j = 0; j < n; j++) {
       const xj = x[j];
       if (xj === 0) continue;

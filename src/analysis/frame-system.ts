@@ -83,7 +83,7 @@ export function prepareModel(model: FrameModel): PreparedModel {
     const kgUnitLocal = geometricStiffnessLocal(el, geo.L, 1);
     return {
       el, geo, T, kLocal, kGlobal: congruent12(T, kLocal), kgUnitLocal, kgUnitGlobal: congruent12(T, kgUnitLocal),
-      dofs, eqs: Int32Array.from(dofs, (d) => dofMap.eq[d]),
+      dofs, eqs: dofs.map((d) => dofMap.eq[d]),
     };
   });
   const degree = new Int32Array(model.nodes.length);
@@ -146,7 +146,7 @@ function addNodal(nodal: Float64Array, l: NodalLoad, factor: number, model: Fram
 
 /** Right-hand side: nodal loads plus the equivalent nodal loads -T^T f_fixed of element loads. */
 export function loadVector(prep: PreparedModel, ls: LoadSet): Float64Array {
-  const full = Float64Array.from(ls.nodal);
+  const full = new Float64Array(ls.nodal);
   prep.elements.forEach((pe, e) => {
     const fef = ls.fixedEnd[e];
     if (!fef) return;

@@ -47,21 +47,31 @@ const dotW = (a: Float64Array, w: Float64Array, b: Float64Array): number => {
 function subspace(prep: PreparedModel, mv: Float64Array, p: number, q: number): { lambdas: number[]; vectors: Float64Array[] } {
   const K = assemble(prep, null);
   const n = K.n;
-  const diag = Float64Array.from({ length: n }, (_, k) => K.get(k, k));
+  const diag = new Float64Array(n);
+  for (let k = 0; k < n; k++) diag[k] = K.get(k, k);
   factorOrThrow(prep, K, undefined, false);
   // Starting vectors: the mass diagonal, unit vectors at the largest m/k ratios, one random vector.
   const ranked = [...Array(n).keys()].filter((k) => mv[k] > 0).sort((a, b) => mv[b] / diag[b] - mv[a] / diag[a]);
-  let X: Float64Array[] = [Float64Array.from(mv)];
+  let X: Float64Array[] = [new Float64Array(mv)];
   for (let k = 0; X.length < q - 1 && k < ranked.length; k++) {
     const e = new Float64Array(n);
     e[ranked[k]] = 1;
     X.push(e);
   }
   const rnd = lcg(12345);
-  while (X.length < q) X.push(Float64Array.from(mv, (m) => m * rnd()));
+  while (X.length < q) {
+    const x = new Float64Array(n);
+    for (let k = 0; k < n; k++) x[k] = mv[k] * rnd();
+    X.push(x);
+  }
   let prev: number[] = [];
   for (let it = 0; it < 200; it++) {
-    const MX = X.map((x) => Float64Array.from(x, (v, k) => v * mv[k]));
+    // (typed-array loops: Float64Array.from with a mapping function is slow in V8)
+    const MX = X.map((x) => {
+      const mx = new Float64Array(n);
+      for (let k = 0; k < n; k++) mx[k] = x[k] * mv[k];
+      return mx;
+    });
     const Y = MX.map((mx) => K.solve(mx));
     const Kr = new Matrix(q, q);
     const Mr = new Matrix(q, q);
