@@ -5,6 +5,7 @@ import type { LoadedDesign } from './design/design.ts';
 import { analyseDesign } from './analyse-design.ts';
 import type { DesignAnalysis } from './analyse-design.ts';
 import { buildDocument } from './report/sections/build-document.ts';
+import { analysisSections } from './report/sections/analysis-sections.ts';
 import { renderPdf } from './report/pdf/render-pdf.ts';
 import type { DocumentModel } from './report/document.ts';
 import { resultsJson } from './export/results-json.ts';
@@ -32,7 +33,7 @@ export interface PackageResult {
 export async function buildPackage(file: string, opts: BuildOptions = {}): Promise<PackageResult> {
   const loaded = loadDesignFile(file, { SOURCE_DATE_EPOCH: opts.env?.SOURCE_DATE_EPOCH });
   const analysis = analyseDesign(loaded.design, { firstOrder: opts.firstOrder });
-  const document = buildDocument(loaded);
+  const document = buildDocument(loaded, { sections: analysisSections(loaded, analysis) });
   const pdf = await renderPdf(document);
   const json = opts.json
     ? resultsJson({ loaded, toolVersion: toolVersion(), ...analysis, secondOrder: analysis.options.secondOrder })

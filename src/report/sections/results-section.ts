@@ -1,0 +1,242 @@
+// Section "Analysis results": per combination the iterations, convergence and base moment
+// amplification, the displacements of the pole top and arm tips, the base reactions (factored
+// and service), the statics check, the envelopes per member and the natural modes.
+import type { DesignAnalysis } from '../../analyse-design.ts';
+import type { CombinationResult, EnvelopeComponent } from '../../analysis/analysis-types.ts';
+import { envelope } from '../../analysis/envelope.ts';
+import type { LoadedDesign } from '../../design/design.ts';
+import type { Combination } from '../../loads/load-types.ts';
+import type { FrameModel, Vec3 } from '../../model/frame.ts';
+import { formatNumber } from '../../units/units.ts';
+import type { Block, DocSection } from '../document.ts';
+import { isFactored } from './combination-labels.ts';
+import { display, memberText, type Display } from './display.ts';
+import { templateBlocks } from './templates.ts';
+import { vecText } from './vector-text.ts';
+
+export const RESULTS_TITLE = 'Analysis results';
+
+/** A relative statics residual at or below this is called negligible (round-off of the solution). */
+export const TINY_RESIDUAL = 1e-6;
+
+/** Node at the tip end of a member (the j end of its last element). */
+export function tipNode(model: FrameModel, member: string): number {
+  const info = model.members.find((m) => m.id === member);
+  if (!info || info.elements.length === 0) throw new Error(`member ${member} has no elements`);
+  return model.elements[info.elements[info.elements.length - 1]].j;
+}
+
+function resultOf(analysis: DesignAnalysis, c: Combination): CombinationResult {
+  const r = analysis.results[c.id];
+  if (!r) throw new Error(`combination ${c.id} has no result`);
+  return r;
+}
+
+function summaryBlocks(analysis: DesignAnalysis, d: Display): Block[] {
+  const second = analysis.options.secondOrder;
+  return [
+    { kind: 'heading', level: 2, text: 'Analysis of each combination' },
+    {
+      kind: 'table',
+      title: second ? 'Second-order iteration and base moment amplification' : 'Base moment (first-order analysis)',
+      header: ['Combination', 'Solutions', 'Last change', 'Residual', 'Base moment, 1st order', 'Base moment, final', 'Amplification'],
+      widths: [118, 44, 46, 46, '*', '*', 56],
+      rows: analysis.combinations.map((c) => {
+        const r = resultOf(analysis, c);
+        const b = r.baseMoment;
+        return [
+          c.id,
+          `${r.iterations}`,
+          r.secondOrder ? r.convergence.change.toExponential(1) : '–',
+          r.secondOrder ? r.convergence.residual.toExponential(1) : '–',
+          b ? d.q(b.firstOrder_Nm, 'moment') : '–',
+          b ? d.q(b.final_Nm, 'moment') : '–',
+          b && b.amplification !== null ? formatNumber(b.amplification, 4) : '–',
+        ];
+      }),
+      note:
+        'Solutions: linear solutions made (1 for first order). Last change: largest change of a displacement in the last iteration relative to the largest displacement (dimensionless). ' +
+        'Residual: out-of-balance force of the final solution with the geometric stiffness rebuilt from its own axial forces, relative to the largest load (dimensionless). ' +
+        'Base moment: resultant bending moment √(My² + Mz²) in the pole at the base; amplification = final / first order (dimensionless).',
+    },
+  ];
+}
+
+function displacementBlocks(loaded: LoadedDesign, analysis: DesignAnalysis, d: Display): Block[] {
+  const { design } = loaded;
+  const poleTop = tipNode(analysis.model, 'pole');
+  const arms = design.arms.map((a) => ({ id: a.id, node: tipNode(analysis.model, a.id) }));
+  return [
+    { kind: 'heading', level: 2, text: 'Displacements of the pole top and the arm tips' },
+    {
+      kind: 'table',
+      title: 'Displacements at the pole top and the arm tips',
+      header: ['Combination', 'Pole top, horizontal', ...arms.flatMap((a) => [`Arm ${a.id} tip, vertical`, `Arm ${a.id} tip, horizontal`])],
+      widths: [118, ...Array.from({ length: 1 + 2 * arms.length }, () => '*' as const)],
+      rows: analysis.combinations.map((c) => {
+        const u = resultOf(analysis, c).displacements;
+        const h = (n: number) => d.q(Math.hypot(u[n][0], u[n][1]), 'section');
+        return [c.id, h(poleTop), ...arms.flatMap((a) => [d.q(u[a.node][2], 'section'), h(a.node)])];
+      }),
+      note: 'Horizontal: resultant of the X and Y translations. Vertical: Z translation, positive up. The deflection checks against the limits use the service combinations.',
+    },
+  ];
+}
+
+function reactionRows(analysis: DesignAnalysis, list: readonly Combination[], d: Display): string[][] {
+  const node = analysis.model.supports[0].node;
+  return list.map((c) => {
+    const r = resultOf(analysis, c).reactions.find((x) => x.node === node);
+    if (!r) throw new Error(`combination ${c.id} has no reaction at node ${node}`);
+    const f = r.force;
+    return [c.id, ...vecText([f[0], f[1], f[2]], 'force', d), ...vecText([f[3], f[4], f[5]], 'moment', d)];
+  });
+}
+
+function reactionBlocks(analysis: DesignAnalysis, d: Display): Block[] {
+  const header = ['Combination', 'Fx', 'Fy', 'Fz', 'Mx', 'My', 'Mz'];
+  const widths = [118, '*', '*', '*', '*', '*', '*'] as const;
+  const note = 'Forces and moments exerted by the support on the structure at the centre of the pole base, global axes. The foundation receives the same values with opposite signs.';
+  const groups: { title: string; list: Combination[] }[] = [
+    { title: 'Base reactions, factored combinations (strength and extreme)', list: analysis.combinations.filter((c) => isFactored(c.category)) },
+    { title: 'Base reactions, service combinations (unfactored)', list: analysis.combinations.filter((c) => c.category === 'service') },
+    { title: 'Base reactions, fatigue combinations', list: analysis.combinations.filter((c) => c.category === 'fatigue') },
+  ];
+  const blocks: Block[] = [{ kind: 'heading', level: 2, text: 'Base reactions' }];
+  for (const g of groups) {
+    if (g.list.length === 0) continue;
+    blocks.push({ kind: 'table', title: g.title, header, widths: [...widths], rows: reactionRows(analysis, g.list, d), note });
+  }
+  return blocks;
+}
+
+function staticsBlocks(analysis: DesignAnalysis, d: Display): Block[] {
+  const deformed = analysis.options.secondOrder;
+  const configurationText = deformed
+    ? 'In this second-order analysis the check is made in the deformed configuration: loads and supports at their displaced positions, so it also shows how closely the second-order equilibrium is met.'
+    : 'In this first-order analysis the check is made on the undeformed structure.';
+  const rows = analysis.combinations.map((c) => resultOf(analysis, c));
+  const blocks: Block[] = [
+    { kind: 'heading', level: 2, text: 'Statics check' },
+    ...templateBlocks('statics-check', { configurationText }).blocks,
+    {
+      kind: 'table',
+      title: 'Statics check: forces',
+      header: ['Combination', 'Applied ΣFx', 'Applied ΣFy', 'Applied ΣFz', 'Reactions ΣFx', 'Reactions ΣFy', 'Reactions ΣFz', '|Residual|'],
+      widths: [108, '*', '*', '*', '*', '*', '*', '*'],
+      rows: rows.map((r) => [
+        r.combination,
+        ...vecText(r.statics.appliedForce_N, 'force', d),
+        ...vecText(r.statics.reactionForce_N, 'force', d),
+        d.q(Math.hypot(...r.statics.residualForce_N), 'force'),
+      ]),
+    },
+    {
+      kind: 'table',
+      title: 'Statics check: moments about the origin',
+      header: ['Combination', 'Applied ΣMx', 'Applied ΣMy', 'Applied ΣMz', 'Reactions ΣMx', 'Reactions ΣMy', 'Reactions ΣMz', '|Residual|', 'Relative residual'],
+      widths: [100, '*', '*', '*', '*', '*', '*', '*', 40],
+      rows: rows.map((r) => [
+        r.combination,
+        ...vecText(r.statics.appliedMoment_Nm, 'moment', d),
+        ...vecText(r.statics.reactionMoment_Nm, 'moment', d),
+        d.q(Math.hypot(...r.statics.residualMoment_Nm), 'moment'),
+        r.statics.relativeResidual.toExponential(1),
+      ]),
+      note: `Configuration of the check: ${deformed ? 'deformed' : 'undeformed'}. The relative residual is dimensionless.`,
+    },
+  ];
+  const worst = rows.reduce((a, b) => (b.statics.relativeResidual > a.statics.relativeResidual ? b : a));
+  const s = worst.statics;
+  if (s.relativeResidual > TINY_RESIDUAL) {
+    const rf = vecText(s.residualForce_N, 'force', d);
+    const rm = vecText(s.residualMoment_Nm, 'moment', d);
+    blocks.push({
+      kind: 'caution',
+      title: 'Statics residual is not negligible',
+      text:
+        `The largest relative residual is ${s.relativeResidual.toExponential(2)}, under combination ${worst.combination}, in the ${s.configuration} configuration: ` +
+        `residual force (${rf.join(', ')}), residual moment (${rm.join(', ')}) about the origin. ` +
+        (s.configuration === 'deformed'
+          ? 'The second-order analysis meets equilibrium in the deformed configuration only as far as its geometric stiffness does (the axial forces acting through the lateral displacements); ' +
+            'this residual measures what it leaves out at these displacements. The checker judges whether it matters against the reactions above.'
+          : 'A first-order analysis should balance to round-off: the checker should find out why this one does not before using the results.'),
+    });
+  } else {
+    blocks.push({ kind: 'paragraph', text: `The largest relative residual is ${s.relativeResidual.toExponential(2)} (combination ${worst.combination}, ${s.configuration} configuration): equilibrium is met to round-off.` });
+  }
+  return blocks;
+}
+
+const ENVELOPE_ROWS: readonly { c: EnvelopeComponent; which: 'max' | 'min'; label: string; dim: 'moment' | 'force' }[] = [
+  { c: 'Mres', which: 'max', label: 'Resultant moment Mres, largest', dim: 'moment' },
+  { c: 'Vres', which: 'max', label: 'Resultant shear Vres, largest', dim: 'force' },
+  { c: 'T', which: 'max', label: 'Torque T, most positive', dim: 'moment' },
+  { c: 'T', which: 'min', label: 'Torque T, most negative', dim: 'moment' },
+  { c: 'N', which: 'max', label: 'Axial N, most tensile', dim: 'force' },
+  { c: 'N', which: 'min', label: 'Axial N, most compressive', dim: 'force' },
+];
+
+function envelopeBlocks(analysis: DesignAnalysis, d: Display): Block[] {
+  const rows: string[][] = [];
+  for (const m of analysis.model.members) {
+    for (const e of ENVELOPE_ROWS) {
+      const env = envelope(analysis.results, m.id, e.c)[e.which];
+      const place = m.kind === 'pole' ? `${d.q(env.s_m, 'length')} above base` : `${d.q(env.s_m, 'length')} from pole face`;
+      rows.push([memberText(m.id), e.label, d.q(env.value, e.dim), env.combination, place]);
+    }
+  }
+  return [
+    { kind: 'heading', level: 2, text: 'Envelopes of internal forces' },
+    {
+      kind: 'table',
+      title: 'Governing internal forces per member, over all combinations',
+      header: ['Member', 'Quantity', 'Value', 'Combination', 'Place'],
+      widths: [44, '*', 62, 118, 82],
+      rows,
+      note: 'Member axes and signs as in the section "Structural model" (N > 0 tension). Extremes are exact along each element. Service combinations are included; strength checks use the factored ones.',
+    },
+  ];
+}
+
+function modeBlocks(analysis: DesignAnalysis, d: Display): Block[] {
+  const pct = (v: number) => `${formatNumber(v * 100, 3)} %`;
+  const total = (k: 0 | 1 | 2) => analysis.modes.reduce((s, m) => s + m.effectiveMassRatio[k], 0);
+  const sum: Vec3 = [total(0), total(1), total(2)];
+  return [
+    { kind: 'heading', level: 2, text: 'Natural frequencies' },
+    {
+      kind: 'paragraph',
+      text: 'Natural modes of the unloaded structure with lumped masses: half the steel mass of each element at each of its end nodes, and the mass of each attachment (weight / g) at its node. Rotational inertia is neglected.',
+    },
+    {
+      kind: 'table',
+      title: 'Natural frequencies, periods and effective mass ratios',
+      header: ['Mode', 'Frequency', 'Period', 'Effective mass X', 'Effective mass Y', 'Effective mass Z'],
+      widths: [36, '*', '*', '*', '*', '*'],
+      rows: [
+        ...analysis.modes.map((m) => [`${m.mode}`, d.q(m.frequency_Hz, 'frequency'), `${formatNumber(m.period_s)} s`, pct(m.effectiveMassRatio[0]), pct(m.effectiveMassRatio[1]), pct(m.effectiveMassRatio[2])]),
+        ['Sum', '', '', pct(sum[0]), pct(sum[1]), pct(sum[2])],
+      ],
+      note: 'Effective mass ratio: effective modal mass in the global direction as a share of the total moving mass.',
+    },
+  ];
+}
+
+export function resultsSection(loaded: LoadedDesign, analysis: DesignAnalysis): DocSection {
+  const d = display(loaded.design.units);
+  return {
+    id: 'results',
+    title: RESULTS_TITLE,
+    blocks: [
+      ...templateBlocks('analysis-results', {}).blocks,
+      ...summaryBlocks(analysis, d),
+      ...displacementBlocks(loaded, analysis, d),
+      ...reactionBlocks(analysis, d),
+      ...staticsBlocks(analysis, d),
+      ...envelopeBlocks(analysis, d),
+      ...modeBlocks(analysis, d),
+    ],
+  };
+}
+

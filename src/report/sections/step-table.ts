@@ -1,0 +1,52 @@
+// Calculation steps as rows of a table, for runs of similar steps: each row keeps what a
+// step block shows (what, symbol = formula, the values substituted, the result with its unit,
+// the source), only more compactly.
+import type { CalcStep, Expr } from '../../calc/step.ts';
+import { formatQuantity, type UnitSystem } from '../../units/units.ts';
+import type { Block } from '../document.ts';
+
+/** A formula with its values, quantities in the user's units (the same words the step block prints). */
+export function exprText(expr: Expr, units: UnitSystem): string {
+  return expr.map((piece) => (typeof piece === 'string' ? piece : formatQuantity(piece.si, piece.dim, units))).join('');
+}
+
+/** The formula with its symbol; formulas that already name their left-hand side print as they are. */
+export function formulaText(s: CalcStep): string {
+  return s.formula.includes('=') ? s.formula : `${s.symbol} = ${s.formula}`;
+}
+
+export interface StepsTableOptions {
+  readonly note?: string;
+  /** Leave out the source column and list (when the sources were printed with the same steps before). */
+  readonly withoutSources?: boolean;
+}
+
+export function stepsTable(title: string, steps: readonly CalcStep[], units: UnitSystem, opts: StepsTableOptions = {}): Block {
+  if (opts.withoutSources) {
+    return {
+      kind: 'table',
+      title,
+      header: ['Quantity', 'Formula', 'Values', 'Result'],
+      widths: ['*', 82, '*', 62],
+      rows: steps.map((s) => [s.description, formulaText(s), `= ${exprText(s.substituted, units)}`, formatQuantity(s.result.si, s.result.dim, units)]),
+      ...(opts.note ? { note: opts.note } : {}),
+    };
+  }
+  const sources = [...new Set(steps.map((s) => s.source))];
+  const rows = steps.map((s) => [
+    s.description,
+    formulaText(s),
+    `= ${exprText(s.substituted, units)}`,
+    formatQuantity(s.result.si, s.result.dim, units),
+    `[${sources.indexOf(s.source) + 1}]`,
+  ]);
+  const sourceNote = sources.map((s, k) => `[${k + 1}] ${s}`).join('  ');
+  return {
+    kind: 'table',
+    title,
+    header: ['Quantity', 'Formula', 'Values', 'Result', 'Source'],
+    widths: ['*', 82, '*', 62, 36],
+    rows,
+    note: opts.note ? `${opts.note} Sources: ${sourceNote}` : `Sources: ${sourceNote}`,
+  };
+}
