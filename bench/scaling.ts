@@ -1,17 +1,18 @@
 // Solve time against segment count: a tapered pole with two arms, built by hand, n prismatic
 // segments per member. solve_ms is assembly + banded LDL^T factorisation + one solve (median of
-// repeated runs after a warm-up); it should grow about linearly with n (narrow band).
+// repeated runs after a warm-up, with the quartile band); it should grow about linearly with n (narrow band).
 import { performance } from 'node:perf_hooks';
 import { assemble, buildLoadSet, factorOrThrow, loadVector, prepareModel } from '../src/analysis/frame-system.ts';
 import type { AppliedLoad } from '../src/loads/load-types.ts';
 import type { FrameElement, FrameModel, FrameNode, MemberInfo, Vec3 } from '../src/model/frame.ts';
+import { timeRepeated, type Timing } from './timing.ts';
 
 export interface ScalingRow {
   readonly segments: number;
   readonly dof: number;
   /** Half bandwidth of the assembled stiffness. */
   readonly bandwidth: number;
-  readonly solve_ms: number;
+  readonly solve: Timing;
 }
 
 function tube(D: number, t: number) {
@@ -68,25 +69,27 @@ export function benchFrame(n: number): { model: FrameModel; loads: AppliedLoad[]
   };
 }
 
-export function scalingTable(segments: number[], repeats = 9): ScalingRow[] {
+/** Timed runs per row: at least MIN_RUNS, more for small models so each row gets about BUDGET_MS. */
+const MIN_RUNS = 31;
+const BUDGET_MS = 400;
+
+export function scalingTable(segments: number[]): ScalingRow[] {
   return segments.map((n) => {
     const { model, loads } = benchFrame(n);
     const prep = prepareModel(model);
     const ls = buildLoadSet(prep, loads.map((load) => ({ load, factor: 1 })));
     const F = loadVector(prep, ls);
+    // One storage for K, reused by every assembly (as the P-delta iteration does).
+    const K = assemble(prep, null);
     const once = (): void => {
-      const K = assemble(prep, null);
+      assemble(prep, null, K);
       factorOrThrow(prep, K, undefined, false);
       K.solve(F);
     };
-    once();
-    const times: number[] = [];
-    for (let k = 0; k < repeats; k++) {
-      const t0 = performance.now();
-      once();
-      times.push(performance.now() - t0);
-    }
-    times.sort((a, b) => a - b);
-    return { segments: n, dof: prep.dofs.nEq, bandwidth: prep.dofs.bw, solve_ms: times[Math.floor(times.length / 2)] };
+    const t0 = performance.now();
+    for (let k = 0; k < 5; k++) once(); // warm-up, also sizes the run count
+    const single = (performance.now() - t0) / 5;
+    const runs = Math.min(4001, Math.max(MIN_RUNS, Math.ceil(BUDGET_MS / Math.max(single, 1e-3))));
+    return { segments: n, dof: prep.dofs.nEq, bandwidth: prep.dofs.bw, solve: timeRepeated(once, runs, 0) };
   });
 }

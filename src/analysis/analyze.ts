@@ -38,6 +38,13 @@ import { staticsCheck } from './statics-check.ts';
 interface Solver {
   readonly prep: PreparedModel;
   linear: BandedMatrix | null;
+  /** Storage reused by every K + Kg assembly of the P-delta iterations. */
+  work: BandedMatrix | null;
+}
+
+function workMatrix(solver: Solver, N: Float64Array): BandedMatrix {
+  solver.work = assemble(solver.prep, N, solver.work ?? undefined);
+  return solver.work;
 }
 
 function linearFactor(solver: Solver, combination: string | undefined): BandedMatrix {
@@ -149,7 +156,7 @@ function runCombination(solver: Solver, loads: readonly FactoredLoad[], opts: An
     let Nused = N;
     let converged = false;
     while (iterations < opts.maxIterations) {
-      const K = assemble(prep, N);
+      const K = workMatrix(solver, N);
       factorOrThrow(prep, K, id, true);
       const u = K.solve(F);
       iterations++;
@@ -176,7 +183,7 @@ function runCombination(solver: Solver, loads: readonly FactoredLoad[], opts: An
     // Member forces use the axial forces that built the matrix the displacements solve.
     final = stateFrom(prep, ls, expand(prep, uPrev), Nused);
     // Out-of-balance force with the geometric stiffness rebuilt from the final axial forces.
-    const r = assemble(prep, N).multiply(uPrev);
+    const r = workMatrix(solver, N).multiply(uPrev);
     for (let k = 0; k < r.length; k++) r[k] -= F[k];
     const fScale = maxAbs(F);
     residual = fScale > 0 ? maxAbs(r) / fScale : 0;
@@ -211,7 +218,7 @@ export function analyzeCombination(
   opts: AnalysisOptions,
 ): CombinationResult {
   checkOptions(opts);
-  const solver: Solver = { prep: prepareModel(model), linear: null };
+  const solver: Solver = { prep: prepareModel(model), linear: null, work: null };
   return deepFreeze(runCombination(solver, combinedLoads(cases, combo), opts, combo.id));
 }
 
@@ -223,7 +230,7 @@ export function analyzeAll(
   opts: AnalysisOptions,
 ): AnalysisResults {
   checkOptions(opts);
-  const solver: Solver = { prep: prepareModel(model), linear: null };
+  const solver: Solver = { prep: prepareModel(model), linear: null, work: null };
   const out: Record<string, CombinationResult> = {};
   for (const combo of combos) {
     if (combo.id in out) throw new Error(`combination id '${combo.id}' appears twice`);
@@ -239,7 +246,7 @@ export function solveLoads(
   loads: readonly AppliedLoad[],
   opts: { readonly stationSpacing_m?: number } = {},
 ): LinearSolution {
-  const solver: Solver = { prep: prepareModel(model), linear: null };
+  const solver: Solver = { prep: prepareModel(model), linear: null, work: null };
   const ls = buildLoadSet(solver.prep, loads.map((load) => ({ load, factor: 1 })));
   const u = linearFactor(solver, undefined).solve(loadVector(solver.prep, ls));
   const st = stateFrom(solver.prep, ls, expand(solver.prep, u), new Float64Array(model.elements.length));

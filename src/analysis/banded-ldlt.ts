@@ -28,6 +28,12 @@ export class BandedMatrix {
     this.data = new Float64Array(n * (bw + 1));
   }
 
+  /** Back to the zero matrix (not factorised), keeping the storage: no new allocation per assembly. */
+  reset(): void {
+    this.data.fill(0);
+    this.factored = false;
+  }
+
   clone(): BandedMatrix {
     const c = new BandedMatrix(this.n, this.bw);
     c.data.set(this.data);

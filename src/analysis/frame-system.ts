@@ -4,6 +4,7 @@ import { UnstableStructureError } from '../errors.ts';
 import type { AppliedLoad, NodalLoad } from '../loads/load-types.ts';
 import type { FrameElement, FrameModel, Vec6 } from '../model/frame.ts';
 import type { Reaction } from './analysis-types.ts';
+import { assemblyPlan, type AssemblyPlan } from './assembly-plan.ts';
 import { BandedMatrix, PivotFailure } from './banded-ldlt.ts';
 import { DOF_NAMES, dofLabel, numberDofs, type DofMap } from './dof-numbering.ts';
 import { elementGeometry, type ElementGeometry } from './element-geometry.ts';
@@ -43,6 +44,7 @@ export interface PreparedModel {
   readonly supported: Uint8Array;
   /** Elements with an end at a support (in element order): the only ones reactions need. */
   readonly atSupports: readonly PreparedElement[];
+  readonly plan: AssemblyPlan;
 }
 
 /** Rejects numbers that would otherwise flow silently into wrong results (NaN, zero stiffness). */
@@ -94,7 +96,7 @@ export function prepareModel(model: FrameModel): PreparedModel {
   const supported = new Uint8Array(model.nodes.length);
   for (const s of model.supports) supported[s.node] = 1;
   const atSupports = elements.filter((pe) => supported[pe.el.i] || supported[pe.el.j]);
-  return { model, elements, dofs: dofMap, degree, supported, atSupports };
+  return { model, elements, dofs: dofMap, degree, supported, atSupports, plan: assemblyPlan(elements, dofMap) };
 }
 
 /** Loads of one analysis, already multiplied by their combination factors. */
@@ -170,27 +172,27 @@ export function expand(prep: PreparedModel, x: ArrayLike<number>): Float64Array 
   return full;
 }
 
-/** Assembles K, plus the geometric stiffness when axial forces (tension +) are given. */
-export function assemble(prep: PreparedModel, axialN: Float64Array | null): BandedMatrix {
+/** Assembles K, plus the geometric stiffness when axial forces (tension +) are given; into `target`
+ * (cleared first) when one of the right size is given, so repeated assemblies reuse one storage. */
+export function assemble(prep: PreparedModel, axialN: Float64Array | null, target?: BandedMatrix): BandedMatrix {
   const { eq, nEq, bw } = prep.dofs;
-  const K = new BandedMatrix(nEq, bw);
+  let K: BandedMatrix;
+  if (target) {
+    if (target.n !== nEq || target.bw !== bw) throw new Error('assemble: target matrix has the wrong size');
+    target.reset();
+    K = target;
+  } else K = new BandedMatrix(nEq, bw);
   const data = K.data;
-  const w = bw + 1;
+  const { start, pos, k, kgUnit } = prep.plan;
   for (let e = 0; e < prep.elements.length; e++) {
-    const pe = prep.elements[e];
-    const ke = pe.kGlobal;
-    const kg = pe.kgUnitGlobal;
     const N = axialN ? axialN[e] : 0;
-    const eqs = pe.eqs;
-    for (let a = 0; a < 12; a++) {
-      const ea = eqs[a];
-      if (ea < 0) continue;
-      const row = ea * w - ea;
-      for (let b = 0; b < 12; b++) {
-        const eb = eqs[b];
-        if (eb < ea) continue;
-        const v = N === 0 ? ke[a * 12 + b] : ke[a * 12 + b] + N * kg[a * 12 + b];
-        if (v !== 0) data[row + eb] += v;
+    const end = start[e + 1];
+    if (N === 0) {
+      for (let m = start[e]; m < end; m++) if (k[m] !== 0) data[pos[m]] += k[m];
+    } else {
+      for (let m = start[e]; m < end; m++) {
+        const v = k[m] + N * kgUnit[m];
+        if (v !== 0) data[pos[m]] += v;
       }
     }
   }

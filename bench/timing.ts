@@ -1,0 +1,39 @@
+// Repeated timing with a robust summary: the median, and the quartiles as the band that
+// shows how much a shared machine disturbed the runs.
+import { performance } from 'node:perf_hooks';
+
+export interface Timing {
+  readonly median_ms: number;
+  /** 25th and 75th percentiles. */
+  readonly p25_ms: number;
+  readonly p75_ms: number;
+  readonly runs: number;
+}
+
+export function quantile(sorted: readonly number[], q: number): number {
+  const pos = (sorted.length - 1) * q;
+  const lo = Math.floor(pos);
+  const hi = Math.ceil(pos);
+  return sorted[lo]! + (sorted[hi]! - sorted[lo]!) * (pos - lo);
+}
+
+export function summarise(times: readonly number[]): Timing {
+  const s = [...times].sort((a, b) => a - b);
+  return { median_ms: quantile(s, 0.5), p25_ms: quantile(s, 0.25), p75_ms: quantile(s, 0.75), runs: s.length };
+}
+
+/** Runs fn `warmup` times untimed (JIT), then `repeats` times timed. */
+export function timeRepeated(fn: () => void, repeats: number, warmup = 3): Timing {
+  for (let k = 0; k < warmup; k++) fn();
+  const t: number[] = [];
+  for (let k = 0; k < repeats; k++) {
+    const t0 = performance.now();
+    fn();
+    t.push(performance.now() - t0);
+  }
+  return summarise(t);
+}
+
+/** "12.34 (11.9-13.1)": median with the quartile band. */
+export const fmtTiming = (t: Timing, digits = 2): string =>
+  `${t.median_ms.toFixed(digits)} (${t.p25_ms.toFixed(digits)}-${t.p75_ms.toFixed(digits)})`;
