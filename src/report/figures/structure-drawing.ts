@@ -4,7 +4,7 @@
 // comes from the caller (already in the user's units): this file only places it.
 import type { Vec3 } from '../../model/frame.ts';
 import { boxOf, fitFrame, viewCoords, type Box, type Frame2D, type ViewKind } from './projection.ts';
-import { arrow, arrowhead, circle, group, INK, line, polygon, svgDocument, text, type Pt } from './svg.ts';
+import { arrow, arrowhead, circle, group, INK, line, polygon, rect, svgDocument, text, type Pt } from './svg.ts';
 
 export interface SceneMember {
   readonly id: string;
@@ -225,13 +225,18 @@ function memberLabel(f: Frame2D, m: SceneMember): string {
   const b = f.at(m.tip);
   if (m.kind === 'pole') {
     const r = (m.rootDiameter_m * f.scale) / 2;
-    return text((a[0] + b[0]) / 2 + r + 5, (a[1] + b[1]) / 2, m.label, { size: 8, bold: true });
+    // low on the pole, below the arms and the dimension rows hung under them
+    return text(a[0] + (b[0] - a[0]) * 0.3 + r + 5, a[1] + (b[1] - a[1]) * 0.3, m.label, { size: 8, bold: true });
   }
   const dx = b[0] - a[0];
   const dy = b[1] - a[1];
   const len = Math.hypot(dx, dy) || 1;
   const right = dx >= 0;
-  return text(b[0] + (dx / len) * 6, b[1] + (dy / len) * 6 + 3, m.label, { size: 8, bold: true, anchor: right ? 'start' : 'end' });
+  // a white ground, as wide as the label is estimated (about 0.6 em per bold character), where it crosses lines
+  const w = m.label.length * 8 * 0.62 + 3;
+  const x0 = b[0] + (dx / len) * 6;
+  const ground = rect(right ? x0 - 1.5 : x0 - w + 1.5, b[1] + (dy / len) * 6 - 6, w, 11, '#ffffff');
+  return ground + text(b[0] + (dx / len) * 6, b[1] + (dy / len) * 6 + 3, m.label, { size: 8, bold: true, anchor: right ? 'start' : 'end' });
 }
 
 /** Elevation looking square to `horizontal` (which points right on the page), Z up. */

@@ -16,6 +16,7 @@ import { display, memberText, type Display } from './display.ts';
 import { mainArm } from './elevation-plan-section.ts';
 import { tipNode } from './results-section.ts';
 import { templateBlocks } from './templates.ts';
+import { withoutRoundOff } from './round-off.ts';
 
 export const DIAGRAMS_TITLE = 'Internal force and deflection diagrams';
 
@@ -26,9 +27,6 @@ const PANELS: readonly { c: EnvelopeComponent; title: string; dim: 'moment' | 'f
   { c: 'N', title: 'Axial force N (tension +)', dim: 'force', marks: ['max', 'min'] },
 ];
 
-/** Values below this fraction of a diagram's largest are round-off, not worth a label. */
-const NOISE = 1e-6;
-
 /** Converts SI to the printed unit of a dimension (for plotting; the same factor as printing). */
 const inUnits = (units: UnitSystem, dim: Dim) => (si: number) => fromSI(si, displayUnit(units, dim), dim);
 const unitText = (units: UnitSystem, dim: Dim) => prettyUnit(displayUnit(units, dim));
@@ -37,18 +35,22 @@ function memberPlot(member: string, kind: 'pole' | 'arm', r: CombinationResult, 
   const ms = r.members[member];
   const x = inUnits(units, 'length');
   const placeText = (s: number) => d.q(s, 'length');
+  // the member's largest force and moment in this combination: the scale of round-off for the others
+  const scaleOf = (dim: 'moment' | 'force') =>
+    Math.max(...PANELS.filter((p) => p.dim === dim).map((p) => Math.max(Math.abs(ms.extremes[p.c].max.value), Math.abs(ms.extremes[p.c].min.value))));
   const panels: PlotPanel[] = PANELS.map((p) => {
     const y = inUnits(units, p.dim);
+    const scaleSI = scaleOf(p.dim);
     const ext = ms.extremes[p.c];
-    const biggest = Math.max(Math.abs(ext.max.value), Math.abs(ext.min.value));
     const marks = p.marks
       .map((w) => ext[w])
       // an extreme at round-off level (no torque, say) needs no label, and max = min needs one
-      .filter((e, k, all) => Math.abs(e.value) > NOISE * biggest && (k === 0 || all[0].value !== e.value || all[0].s_m !== e.s_m))
+      .filter((e, k, all) => withoutRoundOff(e.value, scaleSI) !== 0 && (k === 0 || all[0].value !== e.value || all[0].s_m !== e.s_m))
       .map((e) => ({ x: x(e.s_m), y: y(e.value), label: `${d.q(e.value, p.dim)} at ${placeText(e.s_m)}` }));
+    const zero = marks.length === 0;
     return {
-      title: `${p.title} (${unitText(units, p.dim)})`,
-      points: ms.stations.map((s: Station) => [x(s.s_m), y(stationValue(s, p.c))] as const),
+      title: `${p.title} (${unitText(units, p.dim)})${zero ? ': zero (round-off only)' : ''}`,
+      points: ms.stations.map((s: Station) => [x(s.s_m), y(withoutRoundOff(stationValue(s, p.c), scaleSI))] as const),
       marks,
     };
   });
@@ -116,13 +118,15 @@ function shapeBlocks(design: Design, analysis: DesignAnalysis, d: Display): Bloc
     return add(analysis.model.nodes[node].xyz_m, scale([u[0], u[1], u[2]], mag));
   };
   const tips = members.map((m) => ({ m, node: tipNode(analysis.model, m.id) }));
+  // true displacements for the labels, round-off of the largest one printed as 0
+  const shown = (v: number) => d.q(withoutRoundOff(v, maxU), 'section');
   const elevationLabels: ShapeLabel[] = tips.map(({ m, node }) => {
     const u = r.displacements[node];
-    return { at: displaced(node), text: m.kind === 'pole' ? `pole top: ${d.q(Math.hypot(u[0], u[1]), 'section')} horizontal` : `${m.id} tip: ${d.q(u[2], 'section')} vertical` };
+    return { at: displaced(node), text: m.kind === 'pole' ? `pole top: ${shown(Math.hypot(u[0], u[1]))} horizontal` : `${m.id} tip: ${shown(u[2])} vertical` };
   });
   const planLabels: ShapeLabel[] = tips.map(({ m, node }) => {
     const u = r.displacements[node];
-    return { at: displaced(node), text: `${m.kind === 'pole' ? 'pole top' : `${m.id} tip`}: (${d.q(u[0], 'section')}, ${d.q(u[1], 'section')})` };
+    return { at: displaced(node), text: `${m.kind === 'pole' ? 'pole top' : `${m.id} tip`}: (${shown(u[0])}, ${shown(u[1])})` };
   });
   const main = mainArm(design);
   const phi = main ? main.direction_rad : 0;

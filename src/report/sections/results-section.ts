@@ -13,6 +13,7 @@ import { isFactored } from './combination-labels.ts';
 import { display, memberText, type Display } from './display.ts';
 import { templateBlocks } from './templates.ts';
 import { vecText } from './vector-text.ts';
+import { ROUND_OFF, withoutRoundOff } from './round-off.ts';
 
 export const RESULTS_TITLE = 'Analysis results';
 
@@ -180,10 +181,13 @@ const ENVELOPE_ROWS: readonly { c: EnvelopeComponent; which: 'max' | 'min'; labe
 function envelopeBlocks(analysis: DesignAnalysis, d: Display): Block[] {
   const rows: string[][] = [];
   for (const m of analysis.model.members) {
-    for (const e of ENVELOPE_ROWS) {
-      const env = envelope(analysis.results, m.id, e.c)[e.which];
+    const envs = ENVELOPE_ROWS.map((e) => ({ e, env: envelope(analysis.results, m.id, e.c)[e.which] }));
+    // the member's largest force and moment: the scale of round-off for its other values
+    const scaleOf = (dim: 'moment' | 'force') => Math.max(...envs.filter((x) => x.e.dim === dim).map((x) => Math.abs(x.env.value)));
+    for (const { e, env } of envs) {
+      const value = withoutRoundOff(env.value, scaleOf(e.dim));
       const place = m.kind === 'pole' ? `${d.q(env.s_m, 'length')} above base` : `${d.q(env.s_m, 'length')} from pole face`;
-      rows.push([memberText(m.id), e.label, d.q(env.value, e.dim), env.combination, place]);
+      rows.push(value === 0 ? [memberText(m.id), e.label, d.q(0, e.dim), '– (none)', '–'] : [memberText(m.id), e.label, d.q(value, e.dim), env.combination, place]);
     }
   }
   return [
@@ -194,13 +198,15 @@ function envelopeBlocks(analysis: DesignAnalysis, d: Display): Block[] {
       header: ['Member', 'Quantity', 'Value', 'Combination', 'Place'],
       widths: [44, '*', 62, 118, 82],
       rows,
-      note: 'Member axes and signs as in the section "Structural model" (N > 0 tension). Extremes are exact along each element. Service combinations are included; strength checks use the factored ones.',
+      note:
+        'Member axes and signs as in the section "Structural model" (N > 0 tension). Extremes are exact along each element. Service combinations are included; strength checks use the factored ones. ' +
+        `A value within ${ROUND_OFF} of the member's largest force or moment is round-off and printed as 0, with no combination named.`,
     },
   ];
 }
 
 function modeBlocks(analysis: DesignAnalysis, d: Display): Block[] {
-  const pct = (v: number) => `${formatNumber(v * 100, 3)} %`;
+  const pct = (v: number) => `${formatNumber(withoutRoundOff(v, 1) * 100, 3)} %`;
   const total = (k: 0 | 1 | 2) => analysis.modes.reduce((s, m) => s + m.effectiveMassRatio[k], 0);
   const sum: Vec3 = [total(0), total(1), total(2)];
   return [
@@ -218,7 +224,7 @@ function modeBlocks(analysis: DesignAnalysis, d: Display): Block[] {
         ...analysis.modes.map((m) => [`${m.mode}`, d.q(m.frequency_Hz, 'frequency'), `${formatNumber(m.period_s)} s`, pct(m.effectiveMassRatio[0]), pct(m.effectiveMassRatio[1]), pct(m.effectiveMassRatio[2])]),
         ['Sum', '', '', pct(sum[0]), pct(sum[1]), pct(sum[2])],
       ],
-      note: 'Effective mass ratio: effective modal mass in the global direction as a share of the total moving mass.',
+      note: `Effective mass ratio: effective modal mass in the global direction as a share of the total moving mass; below ${ROUND_OFF} (round-off) it prints as 0.`,
     },
   ];
 }
