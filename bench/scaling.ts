@@ -1,17 +1,20 @@
 // Solve time against segment count: a tapered pole with two arms, built by hand, n prismatic
-// segments per member. solve_ms is assembly + banded LDL^T factorisation + one solve (median of
-// repeated runs after a warm-up, with the quartile band); it should grow about linearly with n (narrow band).
+// segments per member. `solve` is assembly + banded LDL^T factorisation + one solve (median and
+// quartiles of samples of equal length after a warm-up); it should grow about linearly with n (narrow band).
 import { performance } from 'node:perf_hooks';
 import { assemble, buildLoadSet, factorOrThrow, loadVector, prepareModel } from '../src/analysis/frame-system.ts';
 import type { AppliedLoad } from '../src/loads/load-types.ts';
 import type { FrameElement, FrameModel, FrameNode, MemberInfo, Vec3 } from '../src/model/frame.ts';
-import { timeRepeated, type Timing } from './timing.ts';
+import { timeBatched, type Timing } from './timing.ts';
 
 export interface ScalingRow {
   readonly segments: number;
   readonly dof: number;
   /** Half bandwidth of the assembled stiffness. */
   readonly bandwidth: number;
+  /** Runs per timed sample. */
+  readonly batch: number;
+  /** Per run. */
   readonly solve: Timing;
 }
 
@@ -69,9 +72,9 @@ export function benchFrame(n: number): { model: FrameModel; loads: AppliedLoad[]
   };
 }
 
-/** Timed runs per row: at least MIN_RUNS, more for small models so each row gets about BUDGET_MS. */
-const MIN_RUNS = 31;
-const BUDGET_MS = 400;
+/** Timed samples per row, each lasting about SAMPLE_MS (fast models run in batches). */
+const SAMPLES = 61;
+const SAMPLE_MS = 4;
 
 export function scalingTable(segments: number[]): ScalingRow[] {
   return segments.map((n) => {
@@ -87,9 +90,9 @@ export function scalingTable(segments: number[]): ScalingRow[] {
       K.solve(F);
     };
     const t0 = performance.now();
-    for (let k = 0; k < 5; k++) once(); // warm-up, also sizes the run count
+    for (let k = 0; k < 5; k++) once(); // warm-up, also sizes the batch
     const single = (performance.now() - t0) / 5;
-    const runs = Math.min(4001, Math.max(MIN_RUNS, Math.ceil(BUDGET_MS / Math.max(single, 1e-3))));
-    return { segments: n, dof: prep.dofs.nEq, bandwidth: prep.dofs.bw, solve: timeRepeated(once, runs, 0) };
+    const batch = Math.max(1, Math.round(SAMPLE_MS / Math.max(single, 1e-3)));
+    return { segments: n, dof: prep.dofs.nEq, bandwidth: prep.dofs.bw, batch, solve: timeBatched(once, SAMPLES, batch, 0) };
   });
 }

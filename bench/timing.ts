@@ -37,3 +37,19 @@ export function timeRepeated(fn: () => void, repeats: number, warmup = 3): Timin
 /** "12.34 (11.9-13.1)": median with the quartile band. */
 export const fmtTiming = (t: Timing, digits = 2): string =>
   `${t.median_ms.toFixed(digits)} (${t.p25_ms.toFixed(digits)}-${t.p75_ms.toFixed(digits)})`;
+
+/**
+ * Per-run time of a fast fn: each timed sample runs it `batch` times back to back, so that every
+ * sample lasts about as long as a sample of a slower case. On a shared machine a sample's chance of
+ * being interrupted grows with its length; equal sample lengths keep that bias out of a ratio.
+ */
+export function timeBatched(fn: () => void, samples: number, batch: number, warmup = 3): Timing {
+  for (let k = 0; k < warmup; k++) fn();
+  const t: number[] = [];
+  for (let k = 0; k < samples; k++) {
+    const t0 = performance.now();
+    for (let b = 0; b < batch; b++) fn();
+    t.push((performance.now() - t0) / batch);
+  }
+  return summarise(t);
+}

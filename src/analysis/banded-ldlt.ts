@@ -20,6 +20,8 @@ export const PIVOT_RATIO = 1e-10;
 export class BandedMatrix {
   readonly data: Float64Array;
   private factored = false;
+  /** Scratch for the diagonal before elimination, kept across refactorisations. */
+  private diag0: Float64Array | null = null;
 
   constructor(
     readonly n: number,
@@ -81,10 +83,12 @@ export class BandedMatrix {
     const { n, bw, data } = this;
     const w = bw + 1;
     let negatives = 0;
-    // Each pivot is judged against its dof's own diagonal before elimination.
-    const diag0 = new Float64Array(n);
-    for (let i = 0; i < n; i++) diag0[i] = Math.abs(data[i * w]);
+    // Each pivot is judged against its dof's own diagonal before elimination. Row i is first
+    // changed at step i - bw, so its diagonal is kept then (no separate pass over the band).
+    const diag0 = (this.diag0 ??= new Float64Array(n));
+    for (let i = 0; i <= Math.min(bw, n - 1); i++) diag0[i] = Math.abs(data[i * w]);
     for (let j = 0; j < n; j++) {
+      if (j > 0 && j + bw < n) diag0[j + bw] = Math.abs(data[(j + bw) * w]);
       const rowJ = j * w;
       const d = data[rowJ];
       if (countNegative) {
@@ -119,10 +123,10 @@ export class BandedMatrix {
       const top = Math.min(bw, n - 1 - j);
       for (let k = 1; k <= top; k++) x[j + k] -= data[j * w + k] * xj;
     }
-    for (let j = 0; j < n; j++) x[j] /= data[j * w];
+    // D^-1 folded into the backward pass (one pass less over the band)
     for (let j = n - 1; j >= 0; j--) {
       const top = Math.min(bw, n - 1 - j);
-      let s = x[j];
+      let s = x[j] / data[j * w];
       for (let k = 1; k <= top; k++) s -= data[j * w + k] * x[j + k];
       x[j] = s;
     }
