@@ -88,9 +88,22 @@ export interface StaticsCheck {
   /** applied + reactions (zero for exact equilibrium). */
   readonly residualForce_N: Vec3;
   readonly residualMoment_Nm: Vec3;
-  /** max(|residual force| / sum of |applied forces|, |residual moment| / (sum of |applied moments about the
-   * origin| + sum of |applied forces| x largest node distance from the origin)). */
+  /** max(relativeForceResidual, relativeMomentResidual). */
   readonly relativeResidual: number;
+  /** |residual force| / sum of |applied forces|: round-off in both configurations (the geometric
+   * stiffness adds only self-balanced forces), so anything larger is an error. */
+  readonly relativeForceResidual: number;
+  /** |residual moment| / (sum of |applied moments about the origin| + sum of |applied forces| x largest
+   * node distance from the origin). Round-off when undeformed; in the deformed configuration it holds
+   * the first-order terms that the axial-force-only geometric stiffness leaves out (statics-check.ts). */
+  readonly relativeMomentResidual: number;
+  /** Deformed configuration: sum of |applied forces| x largest node displacement, the size of the moments
+   * the displacements add to the loads; 0 when undeformed. */
+  readonly displacementMoment_Nm: number;
+  /** |residual moment| / displacementMoment_Nm: the share of the displacement effect on the moments that
+   * the linearised P-delta method leaves unbalanced (expected well below 1); null when undeformed or
+   * nothing moved. */
+  readonly momentResidualShare: number | null;
 }
 
 /** Resultant bending moment sqrt(My²+Mz²) at the supported end of the elements attached to supports. */

@@ -1,6 +1,30 @@
 // Statics check: the sum of applied loads against the sum of reactions, forces and moments about
 // the global origin. In the deformed configuration (second order) loads and supports sit at their
 // displaced positions, so the check also shows how well the P-delta equilibrium is met.
+//
+// What to expect, reported as two numbers:
+// - Force balance: exact (round-off) in both configurations. The geometric stiffness adds equal and
+//   opposite end forces, so it never unbalances the sum of forces; a force residual above round-off
+//   is an error.
+// - Moment balance in the deformed configuration: NOT exact, by the method. Summing the equilibrium
+//   of the nodes (which the solution meets exactly), the global residual is the sum over elements of
+//   each element's own moment imbalance in its displaced position. The consistent geometric
+//   stiffness built from the axial force only (element-matrices.ts) balances exactly the axial
+//   force acting through the element's transverse displacements (its end forces carry the moment
+//   N (v_j - v_i)), and nothing else. It leaves out first-order products of other forces with
+//   displacements: the shear acting through the axial shortening (a planar cantilever with tip
+//   loads P and H leaves exactly H P L / (E A), tests/analysis/statics-deformed.test.ts), the shear
+//   in one plane acting through the displacement in the other (a torque about the member: e.g.
+//   arm weight through the arm's horizontal deflection), end moments through rotations, rigid
+//   offsets through joint rotations, and loads through their own in-element displacements. A fuller
+//   3D geometric stiffness with the end-moment terms (McGuire, Gallagher & Ziemian, Matrix
+//   Structural Analysis, 2nd ed., ch. 9; from memory) would remove much of this; this package
+//   does not use it.
+//   So the moment residual is of the order of (forces) x (displacements): momentResidualShare
+//   reports it against sum |F| x largest node displacement (the moment the displacements add to
+//   the loads). A share well below 1 says the residual is the expected part of the linearised
+//   method; a share near 1 would mean the omitted terms are as large as the whole displacement
+//   effect, and the second-order results would need a fuller method.
 import type { Vec3 } from '../model/frame.ts';
 import type { Reaction, StaticsCheck } from './analysis-types.ts';
 import { cross } from './element-geometry.ts';
@@ -103,9 +127,17 @@ export function staticsCheck(
   const resM: V3 = [M[0] + RM[0], M[1] + RM[1], M[2] + RM[2]];
   // Moments are judged against the loads' own moments plus their forces times the frame's size,
   // so a frame whose loads pass through the origin still has a meaningful scale.
-  const size = Math.max(...prep.model.nodes.map((n) => Math.hypot(...n.xyz_m)), 1e-9);
+  let size = 1e-9;
+  let moved = 0;
+  for (const n of prep.model.nodes) {
+    size = Math.max(size, Math.hypot(n.xyz_m[0], n.xyz_m[1], n.xyz_m[2]));
+    const o = n.id * 6;
+    if (deformed) moved = Math.max(moved, Math.hypot(U[o], U[o + 1], U[o + 2]));
+  }
   const scaleM = sumM + sumF * size;
-  const rel = Math.max(sumF > 0 ? Math.hypot(...resF) / sumF : 0, scaleM > 0 ? Math.hypot(...resM) / scaleM : 0);
+  const relForce = sumF > 0 ? Math.hypot(...resF) / sumF : 0;
+  const relMoment = scaleM > 0 ? Math.hypot(...resM) / scaleM : 0;
+  const displacementMoment = deformed ? sumF * moved : 0;
   return {
     configuration: deformed ? 'deformed' : 'undeformed',
     appliedForce_N: F,
@@ -114,6 +146,10 @@ export function staticsCheck(
     reactionMoment_Nm: RM,
     residualForce_N: resF,
     residualMoment_Nm: resM,
-    relativeResidual: rel,
+    relativeResidual: Math.max(relForce, relMoment),
+    relativeForceResidual: relForce,
+    relativeMomentResidual: relMoment,
+    displacementMoment_Nm: displacementMoment,
+    momentResidualShare: displacementMoment > 0 ? Math.hypot(...resM) / displacementMoment : null,
   };
 }
