@@ -3,7 +3,7 @@
 // short labels at chosen points. Both shapes share one scale.
 import type { Vec3 } from '../../model/frame.ts';
 import { boxOf, fitFrame, viewCoords, type ViewKind } from './projection.ts';
-import { arrow, circle, INK, polyline, rect, svgDocument, text, type Pt } from './svg.ts';
+import { arrow, circle, INK, polyline, svgDocument, text, type Pt } from './svg.ts';
 
 export interface ShapeLine {
   readonly undeformed: readonly Vec3[];
@@ -45,10 +45,6 @@ export function deflectedShapeView(lines: readonly ShapeLine[], labels: readonly
     const [x, y] = f.at(lab.at);
     body.push(circle(x, y, 1.8, INK.text));
     const right = x < width - padX - 10;
-    // a white ground under the label keeps it readable where it crosses a line (width estimated from the
-    // character count: DejaVu Sans averages about 0.55 em per character)
-    const w = lab.text.length * 7 * 0.55 + 4;
-    body.push(rect(right ? x + 3 : x - 3 - w, y - 11, w, 10, '#ffffff'));
     body.push(text(right ? x + 5 : x - 5, y - 4, lab.text, { size: 7, anchor: right ? 'start' : 'end' }));
   }
   const ox = 16;

@@ -312,7 +312,9 @@ export function planDrawing(scene: Scene, opts: { readonly width?: number; reado
   const pole = scene.members.find((m) => m.kind === 'pole');
   if (pole) {
     const [cx, cy] = f.at([0, 0, 0]);
-    body.push(text(cx, cy - (pole.rootDiameter_m * f.scale) / 2 - 5, pole.label, { size: 8, bold: true, anchor: 'middle' }));
+    // below and to the left of the pole, where arms seldom are
+    const r = (pole.rootDiameter_m * f.scale) / 2;
+    body.push(text(cx - r - 4, cy + r + 9, pole.label, { size: 8, bold: true, anchor: 'end' }));
   }
   const ox = width - 34;
   const oy = height - 12;

@@ -44,8 +44,8 @@ function memberPlot(member: string, kind: 'pole' | 'arm', r: CombinationResult, 
     const ext = ms.extremes[p.c];
     const marks = p.marks
       .map((w) => ext[w])
-      // an extreme at round-off level (no torque, say) needs no label, and max = min needs one
-      .filter((e, k, all) => withoutRoundOff(e.value, scaleSI) !== 0 && (k === 0 || all[0].value !== e.value || all[0].s_m !== e.s_m))
+      // an extreme at round-off level (no torque, say) needs no label, and a constant (max = min) needs one
+      .filter((e, k, all) => withoutRoundOff(e.value, scaleSI) !== 0 && (k === 0 || withoutRoundOff(all[0].value - e.value, scaleSI) !== 0))
       .map((e) => ({ x: x(e.s_m), y: y(e.value), label: `${d.q(e.value, p.dim)} at ${placeText(e.s_m)}` }));
     const zero = marks.length === 0;
     return {
@@ -120,21 +120,24 @@ function shapeBlocks(design: Design, analysis: DesignAnalysis, d: Display): Bloc
   const tips = members.map((m) => ({ m, node: tipNode(analysis.model, m.id) }));
   // true displacements for the labels, round-off of the largest one printed as 0
   const shown = (v: number) => d.q(withoutRoundOff(v, maxU), 'section');
-  const elevationLabels: ShapeLabel[] = tips.map(({ m, node }) => {
-    const u = r.displacements[node];
-    return { at: displaced(node), text: m.kind === 'pole' ? `pole top: ${shown(Math.hypot(u[0], u[1]))} horizontal` : `${m.id} tip: ${shown(u[2])} vertical` };
-  });
-  const planLabels: ShapeLabel[] = tips.map(({ m, node }) => {
-    const u = r.displacements[node];
-    return { at: displaced(node), text: `${m.kind === 'pole' ? 'pole top' : `${m.id} tip`}: (${shown(u[0])}, ${shown(u[1])})` };
-  });
+  // the drawing names the points; their true displacements go in a table beside it
+  const pointName = (m: { kind: 'pole' | 'arm'; id: string }) => (m.kind === 'pole' ? 'pole top' : `${m.id} tip`);
+  const labels: ShapeLabel[] = tips.map(({ m, node }) => ({ at: displaced(node), text: pointName(m) }));
+  const table: Block = {
+    kind: 'table',
+    title: `Displacements of the pole top and the arm tips, ${r.combination}`,
+    header: ['Point', 'ux (along X)', 'uy (along Y)', 'uz (up)'],
+    widths: ['*', 90, 90, 90],
+    rows: tips.map(({ m, node }) => [pointName(m), shown(r.displacements[node][0]), shown(r.displacements[node][1]), shown(r.displacements[node][2])]),
+    note: 'True displacements (not magnified), global axes.',
+  };
   const main = mainArm(design);
   const phi = main ? main.direction_rad : 0;
-  const elevation = deflectedShapeView(lines, elevationLabels, {
+  const elevation = deflectedShapeView(lines, labels, {
     view: { kind: 'elevation', horizontal: [Math.cos(phi), Math.sin(phi), 0] },
     axisNames: [main ? `arm ${main.id} direction` : '+X', 'Z'],
   });
-  const plan = deflectedShapeView(lines, planLabels, { view: { kind: 'plan' }, axisNames: ['X', 'Y'], maxHeight: 260 });
+  const plan = deflectedShapeView(lines, labels, { view: { kind: 'plan' }, axisNames: ['X', 'Y'], maxHeight: 260 });
   const which = service ? `the service combination ${r.combination}, which has the largest displacement of the service combinations` : `combination ${r.combination}, which has the largest displacement (there is no service combination)`;
   const magText =
     mag > 1
@@ -143,8 +146,9 @@ function shapeBlocks(design: Design, analysis: DesignAnalysis, d: Display): Bloc
   return [
     { kind: 'heading', level: 2, text: 'Deflected shape' },
     { kind: 'paragraph', text: `The deflected shape is drawn for ${which}. ${magText}` },
-    { kind: 'figure', title: `Deflected shape in elevation, ${r.combination}`, svg: elevation.svg, width_pt: elevation.width, caption: `${magText} Undeformed axes dashed. Labels give the true (unmagnified) displacements; vertical positive up.` },
-    { kind: 'figure', title: `Deflected shape in plan, ${r.combination}`, svg: plan.svg, width_pt: plan.width, caption: `${magText} Labels give the true displacements (X, Y).` },
+    { kind: 'figure', title: `Deflected shape in elevation, ${r.combination}`, svg: elevation.svg, width_pt: elevation.width, caption: `${magText} Undeformed axes dashed.` },
+    { kind: 'figure', title: `Deflected shape in plan, ${r.combination}`, svg: plan.svg, width_pt: plan.width, caption: `${magText} Undeformed axes dashed.` },
+    table,
   ];
 }
 

@@ -9,6 +9,7 @@ import { elevationDrawing, planDrawing, type HeightDim, type MemberDims, type Sc
 import type { Block, DocSection } from '../document.ts';
 import { display, memberText, type Display } from './display.ts';
 import { templateBlocks } from './templates.ts';
+import { vecText } from './vector-text.ts';
 
 export const ELEVATION_TITLE = 'Structure elevation and plan';
 
@@ -151,7 +152,7 @@ export function elevationPlanSection(loaded: LoadedDesign, analysis: DesignAnaly
       widths: [60, 50, '*', 62, 62, 62],
       rows: design.attachments.map((a) => {
         const s = sceneAttachment(design, a);
-        return [a.id, memberText(a.member), a.member === 'pole' ? `${d.q(a.position_m, 'length')} above base` : `${d.q(a.position_m, 'length')} from pole face`, d.q(s.centre[0], 'length'), d.q(s.centre[1], 'length'), d.q(s.centre[2], 'length')];
+        return [a.id, memberText(a.member), a.member === 'pole' ? `${d.q(a.position_m, 'length')} above base` : `${d.q(a.position_m, 'length')} from pole face`, ...vecText(s.centre, 'length', d)];
       }),
       note: 'The centroid is the point on the member axis at the attachment position plus the offset entered for the attachment; loads act there.',
     });

@@ -1,6 +1,6 @@
 // Section "Loads": the load rules once, then every load case with its calculation steps
-// (the first case of each kind in full, later cases of the same kind as tables), and the
-// resultant of each case from its loads.
+// (each form of step worked in full where it first occurs, every case's steps as a table),
+// and the resultant of each case from its loads.
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { CalcStep } from '../../calc/step.ts';
 import type { LoadedDesign } from '../../design/design.ts';
@@ -34,27 +34,8 @@ const KIND_TEXT: Readonly<Record<LoadCase['kind'], string>> = {
   'ice-wind': 'wind with ice',
 };
 
-/** Runs of this many steps or more with one formula inside a case are tabled after the first. */
-const RUN_TO_TABLE = 4;
-
-/** A case worked in full: each step as a block, except long runs of one formula (first in full, rest tabled). */
-function fullSteps(lc: LoadCase, units: LoadedDesign['design']['units']): Block[] {
-  const byFormula = new Map<string, CalcStep[]>();
-  for (const s of lc.steps) byFormula.set(s.formula, [...(byFormula.get(s.formula) ?? []), s]);
-  const tabled = new Set<CalcStep>();
-  const out: Block[] = [];
-  for (const s of lc.steps) {
-    if (tabled.has(s)) continue;
-    out.push({ kind: 'step', step: s });
-    const run = byFormula.get(s.formula) ?? [];
-    if (run.length >= RUN_TO_TABLE && run[0] === s) {
-      const rest = run.slice(1);
-      rest.forEach((r) => tabled.add(r));
-      out.push(stepsTable(`${lc.id}: the other ${rest.length} steps of the form ${s.formula}`, rest, units));
-    }
-  }
-  return out;
-}
+/** A step's form: steps of one form differ only in their values. */
+const formOf = (s: CalcStep): string => `${s.formula}\u0000${s.source}`;
 
 export function loadCasesSection(loaded: LoadedDesign, analysis: DesignAnalysis): DocSection {
   const { design } = loaded;
@@ -67,19 +48,34 @@ export function loadCasesSection(loaded: LoadedDesign, analysis: DesignAnalysis)
     widths: [110, '*'],
     rows: (Object.keys(RULE_LABEL) as (keyof typeof LOAD_RULES)[]).map((k) => [RULE_LABEL[k], LOAD_RULES[k]]),
   });
-  const seen = new Map<LoadCase['kind'], string>();
+  // The sources the steps cite, listed once and referred to by number in the tables.
+  const sources = [...new Set(analysis.cases.flatMap((lc) => lc.steps.map((st) => st.source)))];
+  const sourceRef = (src: string) => `[${sources.indexOf(src) + 1}]`;
+  blocks.push({
+    kind: 'table',
+    title: 'Sources cited by the load calculation steps',
+    header: ['Ref.', 'Source'],
+    widths: [36, '*'],
+    rows: sources.map((src, k) => [`[${k + 1}]`, src]),
+  });
+  // Each form of step is worked in full once, where it first occurs; every case then lists all
+  // its steps, in order, as a table with their values.
+  const worked = new Set<string>();
   for (const lc of analysis.cases) {
     blocks.push({ kind: 'heading', level: 2, text: `Load case ${lc.id}` });
     blocks.push({ kind: 'paragraph', text: lc.description });
-    const first = seen.get(lc.kind);
-    if (first === undefined) {
-      seen.set(lc.kind, lc.id);
-      blocks.push(...fullSteps(lc, design.units));
-    } else {
+    const fresh: CalcStep[] = [];
+    for (const st of lc.steps) {
+      if (worked.has(formOf(st))) continue;
+      worked.add(formOf(st));
+      fresh.push(st);
+    }
+    for (const st of fresh) blocks.push({ kind: 'step', step: st });
+    if (fresh.length < lc.steps.length) {
       blocks.push(
         stepsTable(`Calculation steps of load case ${lc.id}`, lc.steps, design.units, {
-          withoutSources: true,
-          note: `The same kind of steps as load case ${first}, worked in full above with their sources, here with the values of this case.`,
+          sourceRef,
+          note: fresh.length > 0 ? 'The steps worked in full above are repeated here in order with the others of this case. Sources: the numbered list at the start of the section.' : 'Each form of step is worked in full where it first occurs in this section. Sources: the numbered list at the start of the section.',
         }),
       );
     }

@@ -19,6 +19,8 @@ export interface StepsTableOptions {
   readonly note?: string;
   /** Leave out the source column and list (when the sources were printed with the same steps before). */
   readonly withoutSources?: boolean;
+  /** Short references to a list of sources printed once elsewhere (the table then prints no source list). */
+  readonly sourceRef?: (source: string) => string;
 }
 
 export function stepsTable(title: string, steps: readonly CalcStep[], units: UnitSystem, opts: StepsTableOptions = {}): Block {
@@ -29,6 +31,17 @@ export function stepsTable(title: string, steps: readonly CalcStep[], units: Uni
       header: ['Quantity', 'Formula', 'Values', 'Result'],
       widths: ['*', 82, '*', 62],
       rows: steps.map((s) => [s.description, formulaText(s), `= ${exprText(s.substituted, units)}`, formatQuantity(s.result.si, s.result.dim, units)]),
+      ...(opts.note ? { note: opts.note } : {}),
+    };
+  }
+  if (opts.sourceRef) {
+    const ref = opts.sourceRef;
+    return {
+      kind: 'table',
+      title,
+      header: ['Quantity', 'Formula', 'Values', 'Result', 'Source'],
+      widths: ['*', 82, '*', 62, 36],
+      rows: steps.map((s) => [s.description, formulaText(s), `= ${exprText(s.substituted, units)}`, formatQuantity(s.result.si, s.result.dim, units), ref(s.source)]),
       ...(opts.note ? { note: opts.note } : {}),
     };
   }
