@@ -2,7 +2,7 @@
 import type { AppliedLoad, DistributedLoad, ElementPointLoad } from '../loads/load-types.ts';
 import type { Vec3 } from '../model/frame.ts';
 import { toLocal3 } from './element-geometry.ts';
-import { GAUSS3, hermite, hermiteSlope } from './shape-functions.ts';
+import { GAUSS3, hermiteSlope } from './shape-functions.ts';
 
 /** Positions closer than this are the same point (m). */
 export const SNAP_M = 1e-6;
@@ -25,6 +25,40 @@ function position(a: number, L: number, what: string): number {
   return Math.min(Math.max(a, 0), L);
 }
 
+/** An element load checked and turned into element axes, before any factor. */
+export interface ResolvedLoad {
+  readonly load: DistributedLoad | ElementPointLoad;
+  /** Unit direction in local axes. */
+  readonly local: Vec3;
+  readonly a: number;
+  readonly b: number;
+}
+
+/** Checks one element load and resolves its direction into local axes (once per load and model). */
+export function resolveDirection(load: DistributedLoad | ElementPointLoad, R: Float64Array, L: number): ResolvedLoad {
+  const what = `load '${load.origin.source}' on element ${load.element}`;
+  const dir = unitDirection(load.direction, what);
+  const values = load.kind === 'distributed' ? [load.wA_Npm, load.wB_Npm] : [load.value];
+  if (!values.every(Number.isFinite)) throw new Error(`${what}: magnitude is not a number`);
+  const local = load.axes === 'local' ? ([dir[0], dir[1], dir[2]] as Vec3) : toLocal3(R, dir);
+  if (load.kind === 'distributed') {
+    const a = position(load.a_m, L, what);
+    const b = position(load.b_m, L, what);
+    if (b < a) throw new Error(`${what}: end b_m before start a_m`);
+    return { load, local, a, b };
+  }
+  const a = position(load.a_m, L, what);
+  return { load, local, a, b: a };
+}
+
+/** A resolved load times its combination factor. */
+export function scaleResolved(r: ResolvedLoad, factor: number): LocalLoad {
+  const { load, local } = r;
+  const scaled = (w: number): Vec3 => [local[0] * w * factor, local[1] * w * factor, local[2] * w * factor];
+  if (load.kind === 'distributed') return { kind: 'distributed', a: r.a, b: r.b, qA: scaled(load.wA_Npm), qB: scaled(load.wB_Npm) };
+  return load.kind === 'point-force' ? { kind: 'force', a: r.a, F: scaled(load.value) } : { kind: 'moment', a: r.a, M: scaled(load.value) };
+}
+
 /** Resolves one element load (scaled by factor) into local components. */
 export function resolveElementLoad(
   load: DistributedLoad | ElementPointLoad,
@@ -32,20 +66,7 @@ export function resolveElementLoad(
   L: number,
   factor: number,
 ): LocalLoad {
-  const what = `load '${load.origin.source}' on element ${load.element}`;
-  const dir = unitDirection(load.direction, what);
-  const values = load.kind === 'distributed' ? [load.wA_Npm, load.wB_Npm] : [load.value];
-  if (!values.every(Number.isFinite)) throw new Error(`${what}: magnitude is not a number`);
-  const local = load.axes === 'local' ? ([dir[0], dir[1], dir[2]] as Vec3) : toLocal3(R, dir);
-  const scaled = (w: number): Vec3 => [local[0] * w * factor, local[1] * w * factor, local[2] * w * factor];
-  if (load.kind === 'distributed') {
-    const a = position(load.a_m, L, what);
-    const b = position(load.b_m, L, what);
-    if (b < a) throw new Error(`${what}: end b_m before start a_m`);
-    return { kind: 'distributed', a, b, qA: scaled(load.wA_Npm), qB: scaled(load.wB_Npm) };
-  }
-  const a = position(load.a_m, L, what);
-  return load.kind === 'point-force' ? { kind: 'force', a, F: scaled(load.value) } : { kind: 'moment', a, M: scaled(load.value) };
+  return scaleResolved(resolveDirection(load, R, L), factor);
 }
 
 export function isElementLoad(l: AppliedLoad): l is DistributedLoad | ElementPointLoad {
@@ -58,20 +79,26 @@ export function intensityAt(l: Extract<LocalLoad, { kind: 'distributed' }>, x: n
   return [l.qA[0] + (l.qB[0] - l.qA[0]) * t, l.qA[1] + (l.qB[1] - l.qA[1]) * t, l.qA[2] + (l.qB[2] - l.qA[2]) * t];
 }
 
-/** Adds the work-equivalent end loads of a force F at x. */
-function addForce(eq: Float64Array, F: Vec3, x: number, L: number, w: number): void {
+/** Adds the work-equivalent end loads of a force (F0, F1, F2) at x (Hermite functions of
+ * shape-functions.ts written out: this runs for every load of every combination). */
+function addForce(eq: Float64Array, F0: number, F1: number, F2: number, x: number, L: number, w: number): void {
   const s = x / L;
-  const [n1, n2, n3, n4] = hermite(x, L);
-  eq[0] += w * (1 - s) * F[0];
-  eq[6] += w * s * F[0];
-  eq[1] += w * n1 * F[1];
-  eq[5] += w * n2 * F[1];
-  eq[7] += w * n3 * F[1];
-  eq[11] += w * n4 * F[1];
-  eq[2] += w * n1 * F[2];
-  eq[4] -= w * n2 * F[2];
-  eq[8] += w * n3 * F[2];
-  eq[10] -= w * n4 * F[2];
+  const s2 = s * s;
+  const s3 = s2 * s;
+  const n1 = 1 - 3 * s2 + 2 * s3;
+  const n2 = L * (s - 2 * s2 + s3);
+  const n3 = 3 * s2 - 2 * s3;
+  const n4 = L * (s3 - s2);
+  eq[0] += w * (1 - s) * F0;
+  eq[6] += w * s * F0;
+  eq[1] += w * n1 * F1;
+  eq[5] += w * n2 * F1;
+  eq[7] += w * n3 * F1;
+  eq[11] += w * n4 * F1;
+  eq[2] += w * n1 * F2;
+  eq[4] -= w * n2 * F2;
+  eq[8] += w * n3 * F2;
+  eq[10] -= w * n4 * F2;
 }
 
 /**
@@ -87,10 +114,15 @@ export function fixedEndForces(loads: readonly LocalLoad[], L: number): Float64A
       if (half <= 0) continue;
       for (let g = 0; g < 3; g++) {
         const x = l.a + half * (1 + GAUSS3.t[g]);
-        addForce(eq, intensityAt(l, x), x, L, GAUSS3.w[g] * half);
+        // intensityAt, inline
+        const t = l.b > l.a ? (x - l.a) / (l.b - l.a) : 0;
+        const q0 = l.qA[0] + (l.qB[0] - l.qA[0]) * t;
+        const q1 = l.qA[1] + (l.qB[1] - l.qA[1]) * t;
+        const q2 = l.qA[2] + (l.qB[2] - l.qA[2]) * t;
+        addForce(eq, q0, q1, q2, x, L, GAUSS3.w[g] * half);
       }
     } else if (l.kind === 'force') {
-      addForce(eq, l.F, l.a, L, 1);
+      addForce(eq, l.F[0], l.F[1], l.F[2], l.a, L, 1);
     } else {
       const s = l.a / L;
       const [d1, d2, d3, d4] = hermiteSlope(l.a, L);

@@ -8,7 +8,7 @@ import { assemblyPlan, type AssemblyPlan } from './assembly-plan.ts';
 import { BandedMatrix, PivotFailure } from './banded-ldlt.ts';
 import { DOF_NAMES, dofLabel, numberDofs, type DofMap } from './dof-numbering.ts';
 import { elementGeometry, type ElementGeometry } from './element-geometry.ts';
-import { fixedEndForces, isElementLoad, resolveElementLoad, type LocalLoad } from './element-loads.ts';
+import { fixedEndForces, isElementLoad, resolveDirection, scaleResolved, type LocalLoad, type ResolvedLoad } from './element-loads.ts';
 import {
   congruent12,
   elasticStiffnessLocal,
@@ -45,6 +45,8 @@ export interface PreparedModel {
   /** Elements with an end at a support (in element order): the only ones reactions need. */
   readonly atSupports: readonly PreparedElement[];
   readonly plan: AssemblyPlan;
+  /** Element loads already checked and resolved into local axes (filled by buildLoadSet). */
+  readonly resolved: WeakMap<AppliedLoad, ResolvedLoad>;
 }
 
 /** Rejects numbers that would otherwise flow silently into wrong results (NaN, zero stiffness). */
@@ -96,7 +98,7 @@ export function prepareModel(model: FrameModel): PreparedModel {
   const supported = new Uint8Array(model.nodes.length);
   for (const s of model.supports) supported[s.node] = 1;
   const atSupports = elements.filter((pe) => supported[pe.el.i] || supported[pe.el.j]);
-  return { model, elements, dofs: dofMap, degree, supported, atSupports, plan: assemblyPlan(elements, dofMap) };
+  return { model, elements, dofs: dofMap, degree, supported, atSupports, plan: assemblyPlan(elements, dofMap), resolved: new WeakMap() };
 }
 
 /** Loads of one analysis, already multiplied by their combination factors. */
@@ -125,7 +127,13 @@ export function buildLoadSet(prep: PreparedModel, loads: readonly FactoredLoad[]
     if (isElementLoad(load)) {
       const pe = prep.elements[load.element];
       if (!pe) throw new Error(`load '${load.origin.source}' names element ${load.element}, which does not exist`);
-      local[load.element].push(resolveElementLoad(load, pe.geo.R, pe.geo.L, factor));
+      // checked and turned into local axes once per load, scaled per combination
+      let r = prep.resolved.get(load);
+      if (!r) {
+        r = resolveDirection(load, pe.geo.R, pe.geo.L);
+        prep.resolved.set(load, r);
+      }
+      local[load.element].push(scaleResolved(r, factor));
     } else {
       addNodal(nodal, load, factor, model);
       nodesLoaded.add(load.node);

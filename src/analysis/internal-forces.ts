@@ -118,27 +118,36 @@ export function endInterpolationInto(d: ArrayLike<number>, x: number, L: number,
   out[2] = n1 * d[2] - n2 * d[4] + n3 * d[8] - n4 * d[10];
 }
 
-/** Breakpoints where the internal-force polynomials change: element ends and load starts/ends, snapped. */
+/** Breakpoints where the internal-force polynomials change: element ends and load starts/ends,
+ * sorted, and dropped when within SNAP_M of the sorted value before them. */
 export function pieceBreaks(st: ElementState): number[] {
-  const L = st.pe.geo.L;
-  const xs = [0, L];
-  for (const l of st.loads) {
+  const xs = [0, st.pe.geo.L];
+  const loads = st.loads;
+  for (let k = 0; k < loads.length; k++) {
+    const l = loads[k];
     if (l.kind === 'distributed') xs.push(l.a, l.b);
     else xs.push(l.a);
   }
-  xs.sort((a, b) => a - b);
-  return xs.filter((x, k) => k === 0 || x - xs[k - 1] > SNAP_M);
+  // insertion sort: a handful of values
+  for (let i = 1; i < xs.length; i++) {
+    const v = xs[i];
+    let j = i - 1;
+    while (j >= 0 && xs[j] > v) {
+      xs[j + 1] = xs[j];
+      j--;
+    }
+    xs[j + 1] = v;
+  }
+  const out = [xs[0]];
+  for (let k = 1; k < xs.length; k++) if (xs[k] - xs[k - 1] > SNAP_M) out.push(xs[k]);
+  return out;
 }
 
-/** Internal forces of one element with both ends held, as cubics in t on each piece [x0, x1]. */
+/** Internal forces of one element with both ends held, as cubics in t on each piece [x0, x1]:
+ * per piece k, at 14 k: x0, x1, then 4 coefficients (low to high) each of N, My and Mz. */
 export interface HeldPieces {
   readonly count: number;
-  readonly x0: Float64Array;
-  readonly x1: Float64Array;
-  /** 4 coefficients per piece (low to high) of N, My and Mz. */
-  readonly N: Float64Array;
-  readonly My: Float64Array;
-  readonly Mz: Float64Array;
+  readonly data: Float64Array;
 }
 
 const ZERO12 = new Float64Array(12);
@@ -150,14 +159,7 @@ export function heldPieces(st: ElementState, breaks: readonly number[]): HeldPie
   if (!st.fixedEnd) return null;
   const held: ElementState = { pe: st.pe, d: ZERO12, f: st.fixedEnd, N: 0, loads: st.loads, fixedEnd: null };
   const count = breaks.length - 1;
-  const out: HeldPieces = {
-    count,
-    x0: new Float64Array(count),
-    x1: new Float64Array(count),
-    N: new Float64Array(4 * count),
-    My: new Float64Array(4 * count),
-    Mz: new Float64Array(4 * count),
-  };
+  const data = new Float64Array(14 * count);
   for (let k = 0; k < count; k++) {
     const x0 = breaks[k];
     const x1 = breaks[k + 1];
@@ -167,13 +169,14 @@ export function heldPieces(st: ElementState, breaks: readonly number[]): HeldPie
       ys[1][p] = sample[4];
       ys[2][p] = sample[5];
     }
-    out.x0[k] = x0;
-    out.x1[k] = x1;
-    cubicThroughInto(ys[0], out.N, 4 * k);
-    cubicThroughInto(ys[1], out.My, 4 * k);
-    cubicThroughInto(ys[2], out.Mz, 4 * k);
+    const o = 14 * k;
+    data[o] = x0;
+    data[o + 1] = x1;
+    cubicThroughInto(ys[0], data, o + 2);
+    cubicThroughInto(ys[1], data, o + 6);
+    cubicThroughInto(ys[2], data, o + 10);
   }
-  return out;
+  return { count, data };
 }
 
 const cubicAt = (c: Float64Array, off: number, t: number): number => ((c[off + 3] * t + c[off + 2]) * t + c[off + 1]) * t + c[off];
@@ -190,9 +193,11 @@ export function addParticularDisplacement(st: ElementState, held: HeldPieces | n
   let u = 0;
   let v = 0;
   let w = 0;
+  const hd = held.data;
   for (let k = 0; k < held.count; k++) {
-    const x0 = held.x0[k];
-    const x1 = held.x1[k];
+    const o = 14 * k;
+    const x0 = hd[o];
+    const x1 = hd[o + 1];
     if (x0 >= x - SNAP_M) break;
     const b = Math.min(x1, x);
     const h = (b - x0) / 2;
@@ -200,9 +205,9 @@ export function addParticularDisplacement(st: ElementState, held: HeldPieces | n
       const t = x0 + h * (1 + GAUSS3.t[g]);
       const tau = (2 * t - x0 - x1) / (x1 - x0);
       const wt = h * GAUSS3.w[g];
-      u += (wt * cubicAt(held.N, 4 * k, tau)) / (el.E_Pa * el.A_m2);
-      v += (wt * (x - t) * cubicAt(held.Mz, 4 * k, tau)) / (el.E_Pa * el.Iz_m4);
-      w -= (wt * (x - t) * cubicAt(held.My, 4 * k, tau)) / (el.E_Pa * el.Iy_m4);
+      u += (wt * cubicAt(hd, o + 2, tau)) / (el.E_Pa * el.A_m2);
+      v += (wt * (x - t) * cubicAt(hd, o + 10, tau)) / (el.E_Pa * el.Iz_m4);
+      w -= (wt * (x - t) * cubicAt(hd, o + 6, tau)) / (el.E_Pa * el.Iy_m4);
     }
   }
   out[0] += u;

@@ -38,31 +38,54 @@ function stationAt(st: ElementState, held: HeldPieces | null, x: number, side: S
 
 const isPoint = (l: LocalLoad): boolean => l.kind !== 'distributed';
 
-/** Interior positions of an element: [x, isJump] sorted and snapped. */
-function interiorPositions(st: ElementState, member: MemberInfo, spacing_m: number | null): [number, boolean][] {
+/** Interior positions of the element being processed (reused scratch, read before the next call). */
+const posX: number[] = [];
+const posJump: boolean[] = [];
+
+/** Interior positions of an element, sorted (a load position before a spacing point at the same x)
+ * and snapped, into posX / posJump; returns how many. */
+function interiorPositions(st: ElementState, member: MemberInfo, spacing_m: number | null): number {
   const L = st.pe.geo.L;
   const { sI_m, sJ_m } = st.pe.el;
   const toX = (s: number): number => ((s - sI_m) * L) / (sJ_m - sI_m);
-  const cands: [number, boolean][] = [];
+  let n = 0;
+  // insertion by (x ascending, jump first): a handful of candidates per element
+  const insert = (x: number, jump: boolean): void => {
+    if (!(x > SNAP_M && x < L - SNAP_M)) return;
+    let j = n - 1;
+    while (j >= 0 && (posX[j] > x || (posX[j] === x && jump && !posJump[j]))) {
+      posX[j + 1] = posX[j];
+      posJump[j + 1] = posJump[j];
+      j--;
+    }
+    posX[j + 1] = x;
+    posJump[j + 1] = jump;
+    n++;
+  };
   for (const l of st.loads) {
-    if (isPoint(l)) cands.push([l.a, true]);
-    else if (l.kind === 'distributed') cands.push([l.a, false], [l.b, false]);
+    if (isPoint(l)) insert(l.a, true);
+    else if (l.kind === 'distributed') {
+      insert(l.a, false);
+      insert(l.b, false);
+    }
   }
-  for (const s of member.discontinuities_m) cands.push([toX(s), false]);
+  for (const s of member.discontinuities_m) insert(toX(s), false);
   if (spacing_m && spacing_m > 0) {
     const first = Math.ceil((sI_m + SNAP_M) / spacing_m);
-    for (let k = first; k * spacing_m < sJ_m - SNAP_M; k++) cands.push([toX(k * spacing_m), false]);
+    for (let k = first; k * spacing_m < sJ_m - SNAP_M; k++) insert(toX(k * spacing_m), false);
   }
-  const inside = cands.filter(([x]) => x > SNAP_M && x < L - SNAP_M).sort((a, b) => a[0] - b[0] || Number(b[1]) - Number(a[1]));
-  const out: [number, boolean][] = [];
-  for (const [x, jump] of inside) {
-    const last = out[out.length - 1];
-    if (last && x - last[0] <= SNAP_M) {
-      // keep the first position (a load position sorts before a spacing point at the same place)
-      last[1] = last[1] || jump;
-    } else out.push([x, jump]);
+  // snap: keep the first position of a cluster, a jump if any member of it jumps
+  let m = 0;
+  for (let k = 0; k < n; k++) {
+    if (m > 0 && posX[k] - posX[m - 1] <= SNAP_M) {
+      posJump[m - 1] = posJump[m - 1] || posJump[k];
+    } else {
+      posX[m] = posX[k];
+      posJump[m] = posJump[k];
+      m++;
+    }
   }
-  return out;
+  return m;
 }
 
 function pointLoadNear(st: ElementState, x: number): boolean {
@@ -93,8 +116,10 @@ export function memberStations(
     const held = nextHeld !== undefined ? nextHeld : heldPieces(st, breaks);
     nextHeld = undefined;
     if (k === 0) stations.push(stationAt(st, held, 0, 'right', sI_m));
-    for (const [x, jump] of interiorPositions(st, member, spacing_m)) {
-      if (jump) stations.push(stationAt(st, held, x, 'left', toS(x)), stationAt(st, held, x, 'right', toS(x)));
+    const count = interiorPositions(st, member, spacing_m);
+    for (let p = 0; p < count; p++) {
+      const x = posX[p];
+      if (posJump[p]) stations.push(stationAt(st, held, x, 'left', toS(x)), stationAt(st, held, x, 'right', toS(x)));
       else stations.push(stationAt(st, held, x, 'both', toS(x)));
     }
     if (k === ids.length - 1) {

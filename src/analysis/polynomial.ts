@@ -73,7 +73,8 @@ export function rootsIn(c: Poly, lo: number, hi: number): number[] {
   for (let k = 0; k < c.length; k++) scale = Math.max(scale, Math.abs(c[k]));
   while (deg > 0 && Math.abs(c[deg]) <= 1e-14 * scale) deg--;
   if (deg < 1) return [];
-  const p = Array.prototype.slice.call(c, 0, deg + 1) as number[];
+  const p = new Array<number>(deg + 1);
+  for (let k = 0; k <= deg; k++) p[k] = c[k];
   if (deg === 1) {
     const r = -p[0] / p[1];
     return r > lo && r < hi ? [r] : [];
@@ -136,15 +137,25 @@ export function extremaOn(c: Poly): Extrema {
   return out;
 }
 
-const quad = new Float64Array(2);
+/** Candidate t of an extremum: the ends, then the stationary points (at most 5 for a sextic). */
+const cand = new Float64Array(7);
 
 /** extremaOn written into out (for the hot loop). Candidates: the ends, then the stationary points. */
 export function extremaInto(c: Poly, out: Extrema): void {
+  cand[0] = -1;
+  cand[1] = 1;
+  let n = 2;
+  if (c.length <= 4) {
+    n += quadraticRoots(c.length > 1 ? c[1] : 0, c.length > 2 ? c[2] * 2 : 0, c.length > 3 ? c[3] * 3 : 0, cand, 2);
+  } else {
+    for (const t of rootsIn(derivative(c), -1, 1)) cand[n++] = t;
+  }
   let max = -Infinity;
   let min = Infinity;
   let tMax = -1;
   let tMin = -1;
-  const visit = (t: number): void => {
+  for (let k = 0; k < n; k++) {
+    const t = cand[k];
     const v = evalPoly(c, t);
     if (v > max) {
       max = v;
@@ -154,14 +165,6 @@ export function extremaInto(c: Poly, out: Extrema): void {
       min = v;
       tMin = t;
     }
-  };
-  visit(-1);
-  visit(1);
-  if (c.length <= 4) {
-    const n = quadraticRoots(c.length > 1 ? c[1] : 0, c.length > 2 ? c[2] * 2 : 0, c.length > 3 ? c[3] * 3 : 0, quad);
-    for (let k = 0; k < n; k++) visit(quad[k]);
-  } else {
-    for (const t of rootsIn(derivative(c), -1, 1)) visit(t);
   }
   out.max = max;
   out.tMax = tMax;
@@ -169,24 +172,27 @@ export function extremaInto(c: Poly, out: Extrema): void {
   out.tMin = tMin;
 }
 
-/** Real roots in (-1, 1) of c0 + c1 t + c2 t² (closed form, stable variant), into out; returns how many. */
-function quadraticRoots(c0: number, c1: number, c2: number, out: Float64Array): number {
+/** Real roots in (-1, 1) of c0 + c1 t + c2 t² (closed form, stable variant), into out from off;
+ * returns how many. */
+function quadraticRoots(c0: number, c1: number, c2: number, out: Float64Array, off: number): number {
   const scale = Math.max(Math.abs(c0), Math.abs(c1), Math.abs(c2));
   if (scale === 0) return 0;
   let n = 0;
-  const keep = (t: number): void => {
-    if (t > -1 && t < 1) out[n++] = t;
-  };
   if (Math.abs(c2) <= 1e-14 * scale) {
-    if (!(Math.abs(c1) <= 1e-14 * scale)) keep(-c0 / c1);
+    if (!(Math.abs(c1) <= 1e-14 * scale)) {
+      const t = -c0 / c1;
+      if (t > -1 && t < 1) out[off + n++] = t;
+    }
   } else {
     const disc = c1 * c1 - 4 * c2 * c0;
     if (disc < 0) return 0;
     const q = -0.5 * (c1 + Math.sign(c1 || 1) * Math.sqrt(disc));
-    if (q === 0) keep(0);
+    if (q === 0) out[off + n++] = 0;
     else {
-      keep(q / c2);
-      keep(c0 / q);
+      const t1 = q / c2;
+      if (t1 > -1 && t1 < 1) out[off + n++] = t1;
+      const t2 = c0 / q;
+      if (t2 > -1 && t2 < 1) out[off + n++] = t2;
     }
   }
   return n;

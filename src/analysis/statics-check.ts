@@ -28,13 +28,63 @@
 import type { Vec3 } from '../model/frame.ts';
 import type { Reaction, StaticsCheck } from './analysis-types.ts';
 import { cross } from './element-geometry.ts';
-import { intensityAt } from './element-loads.ts';
 import type { LoadSet, PreparedModel } from './frame-system.ts';
 import type { ElementState } from './member-stations.ts';
 import { GAUSS3 } from './shape-functions.ts';
 import { endInterpolationInto } from './internal-forces.ts';
 
 type V3 = [number, number, number];
+
+/** Running sums: F (0-2), M about the origin (3-5), sum |F| (6), sum |M| (7). */
+type Sums = Float64Array;
+
+/** Adds a force f and a moment m acting at the point p (scalars: no allocation in the hot loop). */
+function apply(acc: Sums, p0: number, p1: number, p2: number, f0: number, f1: number, f2: number, m0: number, m1: number, m2: number): void {
+  const c0 = p1 * f2 - p2 * f1;
+  const c1 = p2 * f0 - p0 * f2;
+  const c2 = p0 * f1 - p1 * f0;
+  acc[0] += f0;
+  acc[1] += f1;
+  acc[2] += f2;
+  acc[3] += c0 + m0;
+  acc[4] += c1 + m1;
+  acc[5] += c2 + m2;
+  // magnitudes only scale the relative residuals
+  acc[6] += Math.sqrt(f0 * f0 + f1 * f1 + f2 * f2);
+  const t0 = c0 + m0;
+  const t1 = c1 + m1;
+  const t2 = c2 + m2;
+  acc[7] += Math.sqrt(t0 * t0 + t1 * t1 + t2 * t2);
+}
+
+const pt = new Float64Array(3);
+const u = new Float64Array(3);
+
+/** Position of the point x along the element (displaced when deformed) into pt. */
+function pointAt(st: ElementState, x: number, deformed: boolean): void {
+  const { R, endI, L } = st.pe.geo;
+  pt[0] = endI[0] + x * R[0];
+  pt[1] = endI[1] + x * R[1];
+  pt[2] = endI[2] + x * R[2];
+  if (deformed) {
+    endInterpolationInto(st.d, x, L, u);
+    pt[0] += R[0] * u[0] + R[3] * u[1] + R[6] * u[2];
+    pt[1] += R[1] * u[0] + R[4] * u[1] + R[7] * u[2];
+    pt[2] += R[2] * u[0] + R[5] * u[1] + R[8] * u[2];
+  }
+}
+
+/** A force (or a moment) given in element axes, acting at x along the element. */
+function applyLocal(acc: Sums, st: ElementState, deformed: boolean, x: number, q0: number, q1: number, q2: number, moment: boolean): void {
+  pointAt(st, x, deformed);
+  const R = st.pe.geo.R;
+  // global = R^T local (toGlobal3), inline
+  const g0 = R[0] * q0 + R[3] * q1 + R[6] * q2;
+  const g1 = R[1] * q0 + R[4] * q1 + R[7] * q2;
+  const g2 = R[2] * q0 + R[5] * q1 + R[8] * q2;
+  if (moment) apply(acc, pt[0], pt[1], pt[2], 0, 0, 0, g0, g1, g2);
+  else apply(acc, pt[0], pt[1], pt[2], g0, g1, g2, 0, 0, 0);
+}
 
 export function staticsCheck(
   prep: PreparedModel,
@@ -44,24 +94,7 @@ export function staticsCheck(
   reactions: readonly Reaction[],
   deformed: boolean,
 ): StaticsCheck {
-  const F: V3 = [0, 0, 0];
-  const M: V3 = [0, 0, 0];
-  let sumF = 0;
-  let sumM = 0;
-  // A force (f0, f1, f2) and a moment (m0, m1, m2) at the point (p0, p1, p2); scalars, for speed.
-  const apply = (p0: number, p1: number, p2: number, f0: number, f1: number, f2: number, m0: number, m1: number, m2: number): void => {
-    const c0 = p1 * f2 - p2 * f1;
-    const c1 = p2 * f0 - p0 * f2;
-    const c2 = p0 * f1 - p1 * f0;
-    F[0] += f0;
-    F[1] += f1;
-    F[2] += f2;
-    M[0] += c0 + m0;
-    M[1] += c1 + m1;
-    M[2] += c2 + m2;
-    sumF += Math.hypot(f0, f1, f2);
-    sumM += Math.hypot(c0 + m0, c1 + m1, c2 + m2);
-  };
+  const acc: Sums = new Float64Array(8);
   const nodePos = (n: number): Vec3 => {
     const x = prep.model.nodes[n].xyz_m;
     return deformed ? [x[0] + U[n * 6], x[1] + U[n * 6 + 1], x[2] + U[n * 6 + 2]] : x;
@@ -71,48 +104,38 @@ export function staticsCheck(
     const o = n * 6;
     if (nodal[o] !== 0 || nodal[o + 1] !== 0 || nodal[o + 2] !== 0 || nodal[o + 3] !== 0 || nodal[o + 4] !== 0 || nodal[o + 5] !== 0) {
       const p = nodePos(n);
-      apply(p[0], p[1], p[2], nodal[o], nodal[o + 1], nodal[o + 2], nodal[o + 3], nodal[o + 4], nodal[o + 5]);
+      apply(acc, p[0], p[1], p[2], nodal[o], nodal[o + 1], nodal[o + 2], nodal[o + 3], nodal[o + 4], nodal[o + 5]);
     }
   }
-  const u = new Float64Array(3);
-  const pt = new Float64Array(3);
   for (const st of states) {
-    const { R, endI, L } = st.pe.geo;
-    const pointAt = (x: number): void => {
-      pt[0] = endI[0] + x * R[0];
-      pt[1] = endI[1] + x * R[1];
-      pt[2] = endI[2] + x * R[2];
-      if (deformed) {
-        endInterpolationInto(st.d, x, L, u);
-        pt[0] += R[0] * u[0] + R[3] * u[1] + R[6] * u[2];
-        pt[1] += R[1] * u[0] + R[4] * u[1] + R[7] * u[2];
-        pt[2] += R[2] * u[0] + R[5] * u[1] + R[8] * u[2];
-      }
-    };
-    // global = R^T local (toGlobal3), inline
-    const applyLocal = (x: number, q0: number, q1: number, q2: number, moment: boolean): void => {
-      pointAt(x);
-      const g0 = R[0] * q0 + R[3] * q1 + R[6] * q2;
-      const g1 = R[1] * q0 + R[4] * q1 + R[7] * q2;
-      const g2 = R[2] * q0 + R[5] * q1 + R[8] * q2;
-      if (moment) apply(pt[0], pt[1], pt[2], 0, 0, 0, g0, g1, g2);
-      else apply(pt[0], pt[1], pt[2], g0, g1, g2, 0, 0, 0);
-    };
-    for (const l of st.loads) {
+    const loads = st.loads;
+    for (let k = 0; k < loads.length; k++) {
+      const l = loads[k];
       if (l.kind === 'distributed') {
         const h = (l.b - l.a) / 2;
         if (h <= 0) continue;
         // deformed positions are cubic: 3-point Gauss keeps the moment exact
         for (let g = 0; g < 3; g++) {
           const x = l.a + h * (1 + GAUSS3.t[g]);
-          const q = intensityAt(l, x);
+          // intensityAt (element-loads.ts), inline
+          const t = l.b > l.a ? (x - l.a) / (l.b - l.a) : 0;
           const w = h * GAUSS3.w[g];
-          applyLocal(x, q[0] * w, q[1] * w, q[2] * w, false);
+          applyLocal(
+            acc, st, deformed, x,
+            (l.qA[0] + (l.qB[0] - l.qA[0]) * t) * w,
+            (l.qA[1] + (l.qB[1] - l.qA[1]) * t) * w,
+            (l.qA[2] + (l.qB[2] - l.qA[2]) * t) * w,
+            false,
+          );
         }
-      } else if (l.kind === 'force') applyLocal(l.a, l.F[0], l.F[1], l.F[2], false);
-      else applyLocal(l.a, l.M[0], l.M[1], l.M[2], true);
+      } else if (l.kind === 'force') applyLocal(acc, st, deformed, l.a, l.F[0], l.F[1], l.F[2], false);
+      else applyLocal(acc, st, deformed, l.a, l.M[0], l.M[1], l.M[2], true);
     }
   }
+  const F: V3 = [acc[0], acc[1], acc[2]];
+  const M: V3 = [acc[3], acc[4], acc[5]];
+  const sumF = acc[6];
+  const sumM = acc[7];
   const RF: V3 = [0, 0, 0];
   const RM: V3 = [0, 0, 0];
   for (const r of reactions) {
