@@ -226,7 +226,7 @@ function memberLabel(f: Frame2D, m: SceneMember): string {
   if (m.kind === 'pole') {
     const r = (m.rootDiameter_m * f.scale) / 2;
     // low on the pole, below the arms and the dimension rows hung under them
-    return text(a[0] + (b[0] - a[0]) * 0.3 + r + 5, a[1] + (b[1] - a[1]) * 0.3, m.label, { size: 8, bold: true });
+    return text(a[0] + (b[0] - a[0]) * 0.15 + r + 5, a[1] + (b[1] - a[1]) * 0.15, m.label, { size: 8, bold: true });
   }
   const dx = b[0] - a[0];
   const dy = b[1] - a[1];

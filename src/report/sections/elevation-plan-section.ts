@@ -134,7 +134,11 @@ export function elevationPlanSection(loaded: LoadedDesign, analysis: DesignAnaly
       caption:
         (main ? `Looking square to arm ${main.id}, toward plan angle ${d.angle(phi + Math.PI / 2)}; ` : 'Looking toward +Y; ') +
         `${directionName(phi, d)} to the right, Z up. Drawn to scale.` +
-        (outOfPlane.length > 0 ? ` Arms ${outOfPlane.map((a) => a.id).join(', ')} are not square to the view and appear shortened; their lengths are in the table of mast arms.` : ''),
+        (outOfPlane.length === 1
+          ? ` Arm ${outOfPlane[0].id} is not square to the view and appears shortened; its length is in the table of mast arms.`
+          : outOfPlane.length > 1
+            ? ` Arms ${outOfPlane.map((a) => a.id).join(', ')} are not square to the view and appear shortened; their lengths are in the table of mast arms.`
+            : ''),
     },
     {
       kind: 'figure',
