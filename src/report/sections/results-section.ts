@@ -159,8 +159,9 @@ function staticsBlocks(analysis: DesignAnalysis, d: Display): Block[] {
         `The largest relative residual is ${s.relativeResidual.toExponential(2)}, under combination ${worst.combination}, in the ${s.configuration} configuration: ` +
         `residual force (${rf.join(', ')}), residual moment (${rm.join(', ')}) about the origin. ` +
         (s.configuration === 'deformed'
-          ? 'The second-order analysis meets equilibrium in the deformed configuration only as far as its geometric stiffness does (the axial forces acting through the lateral displacements); ' +
-            'this residual measures what it leaves out at these displacements. The checker judges whether it matters against the reactions above.'
+          ? 'The second-order analysis represents the deformed geometry by a geometric stiffness built from the axial forces only (an axial force acting through the lateral displacements). ' +
+            'This check places every load and the support at its displaced position, so it also counts the moments of the loads about the displaced structure that such a geometric stiffness does not carry; ' +
+            'the residual is their size at these displacements. The checker judges whether it matters against the reactions above.'
           : 'A first-order analysis should balance to round-off: the checker should find out why this one does not before using the results.'),
     });
   } else {
