@@ -7,10 +7,19 @@ import { GAUSS3, hermiteSlope } from './shape-functions.ts';
 /** Positions closer than this are the same point (m). */
 export const SNAP_M = 1e-6;
 
-export type LocalLoad =
-  | { readonly kind: 'distributed'; readonly a: number; readonly b: number; readonly qA: Vec3; readonly qB: Vec3 }
-  | { readonly kind: 'force'; readonly a: number; readonly F: Vec3 }
-  | { readonly kind: 'moment'; readonly a: number; readonly M: Vec3 };
+/**
+ * An element load in element axes, with its combination factor applied. One shape for every kind,
+ * so the hot loops that read loads see a single object layout (mixed layouts cost allocations).
+ * - distributed: intensity vA at a and vB at b (N/m), linear between;
+ * - force: the force vA (N) at a;  moment: the moment vA (N*m) at a. For these b = a and vB = vA.
+ */
+export interface LocalLoad {
+  readonly kind: 'distributed' | 'force' | 'moment';
+  readonly a: number;
+  readonly b: number;
+  readonly vA: Vec3;
+  readonly vB: Vec3;
+}
 
 function unitDirection(v: Vec3, what: string): Vec3 {
   const n = Math.hypot(v[0], v[1], v[2]);
@@ -55,8 +64,9 @@ export function resolveDirection(load: DistributedLoad | ElementPointLoad, R: Fl
 export function scaleResolved(r: ResolvedLoad, factor: number): LocalLoad {
   const { load, local } = r;
   const scaled = (w: number): Vec3 => [local[0] * w * factor, local[1] * w * factor, local[2] * w * factor];
-  if (load.kind === 'distributed') return { kind: 'distributed', a: r.a, b: r.b, qA: scaled(load.wA_Npm), qB: scaled(load.wB_Npm) };
-  return load.kind === 'point-force' ? { kind: 'force', a: r.a, F: scaled(load.value) } : { kind: 'moment', a: r.a, M: scaled(load.value) };
+  if (load.kind === 'distributed') return { kind: 'distributed', a: r.a, b: r.b, vA: scaled(load.wA_Npm), vB: scaled(load.wB_Npm) };
+  const v = scaled(load.value);
+  return { kind: load.kind === 'point-force' ? 'force' : 'moment', a: r.a, b: r.a, vA: v, vB: v };
 }
 
 /** Resolves one element load (scaled by factor) into local components. */
@@ -74,9 +84,9 @@ export function isElementLoad(l: AppliedLoad): l is DistributedLoad | ElementPoi
 }
 
 /** Intensity of a distributed load at x (inside [a, b]). */
-export function intensityAt(l: Extract<LocalLoad, { kind: 'distributed' }>, x: number): Vec3 {
+export function intensityAt(l: LocalLoad, x: number): Vec3 {
   const t = l.b > l.a ? (x - l.a) / (l.b - l.a) : 0;
-  return [l.qA[0] + (l.qB[0] - l.qA[0]) * t, l.qA[1] + (l.qB[1] - l.qA[1]) * t, l.qA[2] + (l.qB[2] - l.qA[2]) * t];
+  return [l.vA[0] + (l.vB[0] - l.vA[0]) * t, l.vA[1] + (l.vB[1] - l.vA[1]) * t, l.vA[2] + (l.vB[2] - l.vA[2]) * t];
 }
 
 /** Adds the work-equivalent end loads of a force (F0, F1, F2) at x (Hermite functions of
@@ -116,17 +126,17 @@ export function fixedEndForces(loads: readonly LocalLoad[], L: number): Float64A
         const x = l.a + half * (1 + GAUSS3.t[g]);
         // intensityAt, inline
         const t = l.b > l.a ? (x - l.a) / (l.b - l.a) : 0;
-        const q0 = l.qA[0] + (l.qB[0] - l.qA[0]) * t;
-        const q1 = l.qA[1] + (l.qB[1] - l.qA[1]) * t;
-        const q2 = l.qA[2] + (l.qB[2] - l.qA[2]) * t;
+        const q0 = l.vA[0] + (l.vB[0] - l.vA[0]) * t;
+        const q1 = l.vA[1] + (l.vB[1] - l.vA[1]) * t;
+        const q2 = l.vA[2] + (l.vB[2] - l.vA[2]) * t;
         addForce(eq, q0, q1, q2, x, L, GAUSS3.w[g] * half);
       }
     } else if (l.kind === 'force') {
-      addForce(eq, l.F[0], l.F[1], l.F[2], l.a, L, 1);
+      addForce(eq, l.vA[0], l.vA[1], l.vA[2], l.a, L, 1);
     } else {
       const s = l.a / L;
       const [d1, d2, d3, d4] = hermiteSlope(l.a, L);
-      const [mx, my, mz] = l.M;
+      const [mx, my, mz] = l.vA;
       eq[3] += (1 - s) * mx;
       eq[9] += s * mx;
       eq[1] += d1 * mz;

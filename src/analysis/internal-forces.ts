@@ -69,9 +69,9 @@ export function internalForcesInto(st: ElementState, x: number, side: StationSid
         const xi = l.a + h * (1 + GAUSS2[g]);
         // intensityAt (element-loads.ts), inline
         const t = l.b > l.a ? (xi - l.a) / (l.b - l.a) : 0;
-        const q0 = l.qA[0] + (l.qB[0] - l.qA[0]) * t;
-        const q1 = l.qA[1] + (l.qB[1] - l.qA[1]) * t;
-        const q2 = l.qA[2] + (l.qB[2] - l.qA[2]) * t;
+        const q0 = l.vA[0] + (l.vB[0] - l.vA[0]) * t;
+        const q1 = l.vA[1] + (l.vB[1] - l.vA[1]) * t;
+        const q2 = l.vA[2] + (l.vB[2] - l.vA[2]) * t;
         const lever = xi - x;
         F0 -= h * q0;
         F1 -= h * q1;
@@ -85,15 +85,15 @@ export function internalForcesInto(st: ElementState, x: number, side: StationSid
     if (!inside) continue;
     if (l.kind === 'force') {
       const lever = l.a - x;
-      F0 -= l.F[0];
-      F1 -= l.F[1];
-      F2 -= l.F[2];
-      M1 -= -lever * l.F[2];
-      M2 -= lever * l.F[1];
+      F0 -= l.vA[0];
+      F1 -= l.vA[1];
+      F2 -= l.vA[2];
+      M1 -= -lever * l.vA[2];
+      M2 -= lever * l.vA[1];
     } else {
-      M0 -= l.M[0];
-      M1 -= l.M[1];
-      M2 -= l.M[2];
+      M0 -= l.vA[0];
+      M1 -= l.vA[1];
+      M2 -= l.vA[2];
     }
   }
   out[0] = F0;

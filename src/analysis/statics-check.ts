@@ -122,14 +122,14 @@ export function staticsCheck(
           const w = h * GAUSS3.w[g];
           applyLocal(
             acc, st, deformed, x,
-            (l.qA[0] + (l.qB[0] - l.qA[0]) * t) * w,
-            (l.qA[1] + (l.qB[1] - l.qA[1]) * t) * w,
-            (l.qA[2] + (l.qB[2] - l.qA[2]) * t) * w,
+            (l.vA[0] + (l.vB[0] - l.vA[0]) * t) * w,
+            (l.vA[1] + (l.vB[1] - l.vA[1]) * t) * w,
+            (l.vA[2] + (l.vB[2] - l.vA[2]) * t) * w,
             false,
           );
         }
-      } else if (l.kind === 'force') applyLocal(acc, st, deformed, l.a, l.F[0], l.F[1], l.F[2], false);
-      else applyLocal(acc, st, deformed, l.a, l.M[0], l.M[1], l.M[2], true);
+      } else if (l.kind === 'force') applyLocal(acc, st, deformed, l.a, l.vA[0], l.vA[1], l.vA[2], false);
+      else applyLocal(acc, st, deformed, l.a, l.vA[0], l.vA[1], l.vA[2], true);
     }
   }
   const F: V3 = [acc[0], acc[1], acc[2]];
