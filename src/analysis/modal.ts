@@ -44,6 +44,25 @@ const dotW = (a: Float64Array, w: Float64Array, b: Float64Array): number => {
   return s;
 };
 
+const dot = (a: Float64Array, b: Float64Array): number => {
+  let s = 0;
+  for (let k = 0; k < a.length; k++) s += a[k] * b[k];
+  return s;
+};
+
+/** x = sum over a of Y[a] * Q(a, col), skipping zero coefficients (small dense loops kept in their
+ * own functions, which V8 optimises far better than inside the long iteration). */
+function combine(Y: readonly Float64Array[], Q: Matrix, col: number, n: number): Float64Array {
+  const x = new Float64Array(n);
+  for (let a = 0; a < Y.length; a++) {
+    const c = Q.get(a, col);
+    if (c === 0) continue;
+    const y = Y[a];
+    for (let k = 0; k < n; k++) x[k] += y[k] * c;
+  }
+  return x;
+}
+
 function subspace(prep: PreparedModel, mv: Float64Array, p: number, q: number): { lambdas: number[]; vectors: Float64Array[] } {
   const K = assemble(prep, null);
   const n = K.n;
@@ -77,8 +96,7 @@ function subspace(prep: PreparedModel, mv: Float64Array, p: number, q: number): 
     const Mr = new Matrix(q, q);
     for (let a = 0; a < q; a++) {
       for (let b = a; b < q; b++) {
-        let kab = 0;
-        for (let k = 0; k < n; k++) kab += Y[a][k] * MX[b][k];
+        const kab = dot(Y[a], MX[b]);
         const mab = dotW(Y[a], mv, Y[b]);
         Kr.set(a, b, kab); Kr.set(b, a, kab);
         Mr.set(a, b, mab); Mr.set(b, a, mab);
@@ -93,14 +111,7 @@ function subspace(prep: PreparedModel, mv: Float64Array, p: number, q: number): 
     const order = evd.realEigenvalues.map((v, k) => [v, k] as const).sort((a, b) => a[0] - b[0]);
     const Q = Linv.transpose().mmul(evd.eigenvectorMatrix);
     const lambdas = order.map(([v]) => v);
-    X = order.map(([, col]) => {
-      const x = new Float64Array(n);
-      for (let a = 0; a < q; a++) {
-        const c = Q.get(a, col);
-        if (c !== 0) for (let k = 0; k < n; k++) x[k] += Y[a][k] * c;
-      }
-      return x;
-    });
+    X = order.map(([, col]) => combine(Y, Q, col, n));
     const done = prev.length === q && lambdas.slice(0, p).every((l, k) => Math.abs(l - prev[k]) <= 1e-12 * Math.abs(l));
     prev = lambdas;
     if (done) return { lambdas, vectors: X };
