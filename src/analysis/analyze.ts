@@ -70,7 +70,8 @@ const maxAbs = (v: ArrayLike<number>): number => {
   return m;
 };
 
-const vec6 = (f: ArrayLike<number>, off: number): Vec6 => [f[off], f[off + 1], f[off + 2], f[off + 3], f[off + 4], f[off + 5]];
+/** Six values as a frozen Vec6 (frozen where made, so the final deepFreeze skips them). */
+const vec6 = (f: ArrayLike<number>, off: number): Vec6 => Object.freeze([f[off], f[off + 1], f[off + 2], f[off + 3], f[off + 4], f[off + 5]] as const);
 
 interface State {
   readonly U: Float64Array;
@@ -123,7 +124,7 @@ function solution(prep: PreparedModel, ls: LoadSet, st: State, spacing_m: number
   const reacts: Reaction[] = reactions(prep, st.U, ls, st.endForces);
   const members: Record<string, MemberStations> = {};
   for (const m of model.members) members[m.id] = memberStations(prep, states, ls, m, spacing_m);
-  const elementEnd: ElementEndForces[] = st.endForces.map((f, e) => ({
+  const elementEnd: ElementEndForces[] = st.endForces.map((f, e) => Object.freeze({
     element: e,
     i: vec6(f, 0),
     j: vec6(f, 6),

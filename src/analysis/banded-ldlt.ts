@@ -1,5 +1,6 @@
 // Symmetric banded matrix with an in-place LDL^T factorisation and solve (no pivoting).
-// Storage: row i holds K(i, i..i+bw) at data[i*(bw+1) + (j-i)]. Cost n*bw^2/2, linear in n.
+// Storage: row i holds K(i, i..i+bw) at data[i*(bw+1) + (j-i)]. Cost at most n*bw^2/2 (the work follows
+// each row's profile inside the band), linear in n.
 
 /** Thrown by factor() when a pivot is not clearly positive; the caller names the dof. */
 export class PivotFailure extends Error {
@@ -22,6 +23,8 @@ export class BandedMatrix {
   private factored = false;
   /** Scratch for the diagonal before elimination, kept across refactorisations. */
   private diag0: Float64Array | null = null;
+  /** Per factorised row, the offset of its last non-zero entry (the solve skips the zeros past it). */
+  private rowTop: Int32Array | null = null;
 
   constructor(
     readonly n: number,
@@ -86,6 +89,7 @@ export class BandedMatrix {
     // Each pivot is judged against its dof's own diagonal before elimination. Row i is first
     // changed at step i - bw, so its diagonal is kept then (no separate pass over the band).
     const diag0 = (this.diag0 ??= new Float64Array(n));
+    const rowTop = (this.rowTop ??= new Int32Array(n));
     for (let i = 0; i <= Math.min(bw, n - 1); i++) diag0[i] = Math.abs(data[i * w]);
     for (let j = 0; j < n; j++) {
       if (j > 0 && j + bw < n) diag0[j + bw] = Math.abs(data[(j + bw) * w]);
@@ -97,7 +101,11 @@ export class BandedMatrix {
       } else {
         if (!(d > PIVOT_RATIO * diag0[j]) || !(d > 0)) throw new PivotFailure(j, d, diag0[j]);
       }
-      const top = Math.min(bw, n - 1 - j);
+      // Row j is final here; entries past its last non-zero are zeros that would change nothing,
+      // so the work follows the profile of each row rather than the full band.
+      let top = Math.min(bw, n - 1 - j);
+      while (top > 0 && data[rowJ + top] === 0) top--;
+      rowTop[j] = top;
       for (let k = 1; k <= top; k++) {
         const lk = data[rowJ + k] / d;
         if (lk === 0) continue;
@@ -114,18 +122,19 @@ export class BandedMatrix {
   solve(b: ArrayLike<number>): Float64Array {
     if (!this.factored) throw new Error('solve before factor');
     const { n, bw, data } = this;
+    const rowTop = this.rowTop as Int32Array;
     const w = bw + 1;
     const x = new Float64Array(n);
     for (let k = 0; k < n; k++) x[k] = b[k];
     for (let j = 0; j < n; j++) {
       const xj = x[j];
       if (xj === 0) continue;
-      const top = Math.min(bw, n - 1 - j);
+      const top = rowTop[j];
       for (let k = 1; k <= top; k++) x[j + k] -= data[j * w + k] * xj;
     }
     // D^-1 folded into the backward pass (one pass less over the band)
     for (let j = n - 1; j >= 0; j--) {
-      const top = Math.min(bw, n - 1 - j);
+      const top = rowTop[j];
       let s = x[j] / data[j * w];
       for (let k = 1; k <= top; k++) s -= data[j * w + k] * x[j + k];
       x[j] = s;

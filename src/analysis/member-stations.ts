@@ -26,14 +26,14 @@ function stationAt(st: ElementState, held: HeldPieces | null, x: number, side: S
   endInterpolationInto(st.d, x, st.pe.geo.L, local);
   addParticularDisplacement(st, held, x, local);
   const R = st.pe.geo.R;
-  // global = R^T local (toGlobal3)
-  return {
+  // global = R^T local (toGlobal3). Frozen here, so the final deepFreeze skips the many stations.
+  return Object.freeze({
     s_m: s, element: st.pe.el.id, x_m: x, side,
     N_N: forces[0], Vy_N: forces[1], Vz_N: forces[2], T_Nm: forces[3], My_Nm: forces[4], Mz_Nm: forces[5],
     ux_m: R[0] * local[0] + R[3] * local[1] + R[6] * local[2],
     uy_m: R[1] * local[0] + R[4] * local[1] + R[7] * local[2],
     uz_m: R[2] * local[0] + R[5] * local[1] + R[8] * local[2],
-  };
+  });
 }
 
 const isPoint = (l: LocalLoad): boolean => l.kind !== 'distributed';
