@@ -81,6 +81,7 @@ export function loadCasesSection(loaded: LoadedDesign, analysis: DesignAnalysis)
     }
   }
   blocks.push({ kind: 'heading', level: 2, text: 'Resultants of the load cases' });
+  blocks.push({ kind: 'paragraph', text: 'The sum of the loads of each case, unfactored: a check on the steps above, and the loads the reactions of each combination must balance.' });
   blocks.push({
     kind: 'table',
     title: 'Sum of the loads of each case (unfactored)',

@@ -38,6 +38,12 @@ function summaryBlocks(analysis: DesignAnalysis, d: Display): Block[] {
   return [
     { kind: 'heading', level: 2, text: 'Analysis of each combination' },
     {
+      kind: 'paragraph',
+      text: second
+        ? 'For each combination: the linear solutions the second-order iteration took, how far it converged, and the resultant base moment of the pole in first order and in second order with their ratio, the amplification.'
+        : 'For each combination: the resultant base moment of the pole (first-order analysis, one linear solution each).',
+    },
+    {
       kind: 'table',
       title: second ? 'Second-order iteration and base moment amplification' : 'Base moment (first-order analysis)',
       header: ['Combination', 'Solutions', 'Last change', 'Residual', 'Base moment, 1st order', 'Base moment, final', 'Amplification'],
@@ -69,6 +75,7 @@ function displacementBlocks(loaded: LoadedDesign, analysis: DesignAnalysis, d: D
   const arms = design.arms.map((a) => ({ id: a.id, node: tipNode(analysis.model, a.id) }));
   return [
     { kind: 'heading', level: 2, text: 'Displacements of the pole top and the arm tips' },
+    { kind: 'paragraph', text: 'Displacements of the pole top and of every arm tip under each combination, in global axes.' },
     {
       kind: 'table',
       title: 'Displacements at the pole top and the arm tips',
@@ -103,7 +110,10 @@ function reactionBlocks(analysis: DesignAnalysis, d: Display): Block[] {
     { title: 'Base reactions, service combinations (unfactored)', list: analysis.combinations.filter((c) => c.category === 'service') },
     { title: 'Base reactions, fatigue combinations', list: analysis.combinations.filter((c) => c.category === 'fatigue') },
   ];
-  const blocks: Block[] = [{ kind: 'heading', level: 2, text: 'Base reactions' }];
+  const blocks: Block[] = [
+    { kind: 'heading', level: 2, text: 'Base reactions' },
+    { kind: 'paragraph', text: 'The reactions at the pole base for the foundation design: factored combinations (strength and extreme) first, then service combinations, each combination analysed on its own.' },
+  ];
   for (const g of groups) {
     if (g.list.length === 0) continue;
     blocks.push({ kind: 'table', title: g.title, header, widths: [...widths], rows: reactionRows(analysis, g.list, d), note });
@@ -193,6 +203,7 @@ function envelopeBlocks(analysis: DesignAnalysis, d: Display): Block[] {
   }
   return [
     { kind: 'heading', level: 2, text: 'Envelopes of internal forces' },
+    { kind: 'paragraph', text: 'For each member, the governing internal forces over all combinations, with the combination and the place that give them.' },
     {
       kind: 'table',
       title: 'Governing internal forces per member, over all combinations',
