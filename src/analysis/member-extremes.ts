@@ -6,14 +6,30 @@ import type { EnvelopeComponent, Extreme } from './analysis-types.ts';
 import { internalForcesInto, type ElementState } from './internal-forces.ts';
 import { CHEB4, cubicThroughInto, extremaInto, type Extrema } from './polynomial.ts';
 
-export type ExtremeAcc = Record<EnvelopeComponent, { max: Extreme; min: Extreme }>;
+/** Running extremes of a member: per component c (COMPONENTS order) at 4 c: max, its s, min, its s. */
+export type ExtremeAcc = Float64Array;
 
 export const COMPONENTS: readonly EnvelopeComponent[] = ['N', 'Vy', 'Vz', 'T', 'My', 'Mz', 'Mres', 'Vres'];
 
 export function emptyExtremes(): ExtremeAcc {
-  const acc = {} as ExtremeAcc;
-  for (const c of COMPONENTS) acc[c] = { max: { value: -Infinity, s_m: 0 }, min: { value: Infinity, s_m: 0 } };
+  const acc = new Float64Array(4 * COMPONENTS.length);
+  for (let c = 0; c < COMPONENTS.length; c++) {
+    acc[4 * c] = -Infinity;
+    acc[4 * c + 2] = Infinity;
+  }
   return acc;
+}
+
+/** The record MemberStations.extremes holds (frozen). */
+export function extremesRecord(acc: ExtremeAcc): Readonly<Record<EnvelopeComponent, { readonly max: Extreme; readonly min: Extreme }>> {
+  const out = {} as Record<EnvelopeComponent, { readonly max: Extreme; readonly min: Extreme }>;
+  COMPONENTS.forEach((name, c) => {
+    out[name] = Object.freeze({
+      max: Object.freeze({ value: acc[4 * c], s_m: acc[4 * c + 1] }),
+      min: Object.freeze({ value: acc[4 * c + 2], s_m: acc[4 * c + 3] }),
+    });
+  });
+  return Object.freeze(out);
 }
 
 const sample = new Float64Array(6);
@@ -40,8 +56,11 @@ function sumOfSquares(a: Float64Array, b: Float64Array, out: Float64Array): void
   for (let k = 0; k < 7; k++) out[k] = sa[k] + sb[k];
 }
 
-/** Folds the extremes of one element (breakpoints `breaks`, member coordinate s = toS(x)) into acc. */
-export function updateExtremes(acc: ExtremeAcc, st: ElementState, breaks: readonly number[], toS: (x: number) => number): void {
+/** Folds the extremes of one element (breakpoints `breaks`) into acc; the element spans sI_m..sJ_m of
+ * the member, s = sI_m + x (sJ_m - sI_m) / L. */
+export function updateExtremes(acc: ExtremeAcc, st: ElementState, breaks: readonly number[]): void {
+  const { sI_m, sJ_m } = st.pe.el;
+  const L = st.pe.geo.L;
   for (let k = 0; k + 1 < breaks.length; k++) {
     const x0 = breaks[k];
     const x1 = breaks[k + 1];
@@ -51,7 +70,6 @@ export function updateExtremes(acc: ExtremeAcc, st: ElementState, breaks: readon
     }
     for (let c = 0; c < 6; c++) cubicThroughInto(ys[c], cubics, 4 * c);
     for (let c = 0; c < 8; c++) {
-      const name = COMPONENTS[c];
       let poly: Float64Array;
       if (c < 6) poly = cubic[c];
       else {
@@ -63,9 +81,15 @@ export function updateExtremes(acc: ExtremeAcc, st: ElementState, breaks: readon
       const root = c >= 6;
       const max = root ? Math.sqrt(Math.max(found.max, 0)) : found.max;
       const min = root ? Math.sqrt(Math.max(found.min, 0)) : found.min;
-      const e = acc[name];
-      if (max > e.max.value) e.max = { value: max, s_m: toS(x0 + ((found.tMax + 1) * (x1 - x0)) / 2) };
-      if (min < e.min.value) e.min = { value: min, s_m: toS(x0 + ((found.tMin + 1) * (x1 - x0)) / 2) };
+      const o = 4 * c;
+      if (max > acc[o]) {
+        acc[o] = max;
+        acc[o + 1] = sI_m + ((x0 + ((found.tMax + 1) * (x1 - x0)) / 2) * (sJ_m - sI_m)) / L;
+      }
+      if (min < acc[o + 2]) {
+        acc[o + 2] = min;
+        acc[o + 3] = sI_m + ((x0 + ((found.tMin + 1) * (x1 - x0)) / 2) * (sJ_m - sI_m)) / L;
+      }
     }
   }
 }

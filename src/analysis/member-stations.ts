@@ -14,7 +14,7 @@ import {
   type ElementState,
   type HeldPieces,
 } from './internal-forces.ts';
-import { emptyExtremes, updateExtremes } from './member-extremes.ts';
+import { emptyExtremes, extremesRecord, updateExtremes } from './member-extremes.ts';
 
 export type { ElementState } from './internal-forces.ts';
 
@@ -141,9 +141,9 @@ export function memberStations(
         stations.push(stationAt(st, held, L, 'left', sJ_m), stationAt(next, nextHeld, 0, 'right', next.pe.el.sI_m));
       } else stations.push(stationAt(st, held, L, 'both', sJ_m));
     }
-    updateExtremes(acc, st, breaks, toS);
+    updateExtremes(acc, st, breaks);
   }
-  return { member: member.id, stations, extremes: acc };
+  return { member: member.id, stations, extremes: extremesRecord(acc) };
 }
 
 /** Evaluates a component of a station. */

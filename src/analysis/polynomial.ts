@@ -68,45 +68,75 @@ export function cubicThroughInto(y: ArrayLike<number>, out: Float64Array, off: n
  * bracket (a bisection step whenever Newton would leave it); exact to round-off for any degree.
  */
 export function rootsIn(c: Poly, lo: number, hi: number): number[] {
-  let deg = c.length - 1;
+  const out = new Float64Array(Math.max(c.length, 1));
+  const n = rootsInto(c, c.length, lo, hi, out, 0);
+  return Array.from(out.subarray(0, n));
+}
+
+/** Highest degree rootsIn handles without allocating (a sextic's derivative needs 5). */
+const MAX_DEG = 8;
+/** Per recursion depth: the trimmed polynomial, its derivative, and the derivative's roots. */
+const work = Array.from({ length: MAX_DEG + 2 }, () => ({
+  p: new Float64Array(MAX_DEG + 1),
+  d: new Float64Array(MAX_DEG),
+  cuts: new Float64Array(MAX_DEG),
+}));
+
+/** evalPoly of p[0..deg]. */
+function evalDeg(p: Float64Array, deg: number, t: number): number {
+  let v = 0;
+  for (let k = deg; k >= 0; k--) v = v * t + p[k];
+  return v;
+}
+
+/** Roots of c[0..len-1] inside (lo, hi), ascending, into out; returns how many. */
+function rootsInto(c: Poly, len: number, lo: number, hi: number, out: Float64Array, depth: number): number {
+  let deg = len - 1;
+  if (deg > MAX_DEG) throw new Error(`rootsIn: degree ${deg} above ${MAX_DEG}`);
   let scale = 0;
-  for (let k = 0; k < c.length; k++) scale = Math.max(scale, Math.abs(c[k]));
+  for (let k = 0; k < len; k++) scale = Math.max(scale, Math.abs(c[k]));
   while (deg > 0 && Math.abs(c[deg]) <= 1e-14 * scale) deg--;
-  if (deg < 1) return [];
-  const p = new Array<number>(deg + 1);
+  if (deg < 1) return 0;
+  const ws = work[depth];
+  const p = ws.p;
   for (let k = 0; k <= deg; k++) p[k] = c[k];
   if (deg === 1) {
     const r = -p[0] / p[1];
-    return r > lo && r < hi ? [r] : [];
+    if (r > lo && r < hi) {
+      out[0] = r;
+      return 1;
+    }
+    return 0;
   }
-  const inner = rootsIn(derivative(p), lo, hi);
-  const roots: number[] = [];
+  for (let k = 1; k <= deg; k++) ws.d[k - 1] = p[k] * k;
+  const inner = rootsInto(ws.d, deg, lo, hi, ws.cuts, depth + 1);
+  let n = 0;
   let a = lo;
-  let fa = evalPoly(p, a);
-  for (let k = 0; k <= inner.length; k++) {
-    const b = k < inner.length ? inner[k] : hi;
-    const fb = evalPoly(p, b);
+  let fa = evalDeg(p, deg, a);
+  for (let k = 0; k <= inner; k++) {
+    const b = k < inner ? ws.cuts[k] : hi;
+    const fb = evalDeg(p, deg, b);
     if (fa === 0) {
-      if (a > lo) roots.push(a);
+      if (a > lo) out[n++] = a;
     } else if (fb === 0) {
-      if (b < hi) roots.push(b);
+      if (b < hi) out[n++] = b;
     } else if (fa * fb < 0) {
-      const r = bracketedNewton(p, a, fa, b);
-      if (r > lo && r < hi) roots.push(r);
+      const r = bracketedNewton(p, deg, a, fa, b);
+      if (r > lo && r < hi) out[n++] = r;
     }
     a = b;
     fa = fb;
   }
-  return roots;
+  return n;
 }
 
-/** The root of p in (a, b), where p is monotone and p(a) = fa has the opposite sign of p(b). */
-function bracketedNewton(p: number[], a: number, fa: number, b: number): number {
+/** The root of p[0..deg] in (a, b), where p is monotone and p(a) = fa has the opposite sign of p(b). */
+function bracketedNewton(p: Float64Array, deg: number, a: number, fa: number, b: number): number {
   let x = (a + b) / 2;
   for (let it = 0; it < 200; it++) {
     let v = 0;
     let dv = 0;
-    for (let k = p.length - 1; k >= 0; k--) {
+    for (let k = deg; k >= 0; k--) {
       dv = dv * x + v;
       v = v * x + p[k];
     }
@@ -138,7 +168,9 @@ export function extremaOn(c: Poly): Extrema {
 }
 
 /** Candidate t of an extremum: the ends, then the stationary points (at most 5 for a sextic). */
-const cand = new Float64Array(7);
+const cand = new Float64Array(MAX_DEG + 2);
+const dc = new Float64Array(MAX_DEG);
+const stationary = new Float64Array(MAX_DEG);
 
 /** extremaOn written into out (for the hot loop). Candidates: the ends, then the stationary points. */
 export function extremaInto(c: Poly, out: Extrema): void {
@@ -148,7 +180,10 @@ export function extremaInto(c: Poly, out: Extrema): void {
   if (c.length <= 4) {
     n += quadraticRoots(c.length > 1 ? c[1] : 0, c.length > 2 ? c[2] * 2 : 0, c.length > 3 ? c[3] * 3 : 0, cand, 2);
   } else {
-    for (const t of rootsIn(derivative(c), -1, 1)) cand[n++] = t;
+    const len = c.length - 1;
+    for (let k = 1; k <= len; k++) dc[k - 1] = c[k] * k;
+    n += rootsInto(dc, len, -1, 1, stationary, 0);
+    for (let k = 2; k < n; k++) cand[k] = stationary[k - 2];
   }
   let max = -Infinity;
   let min = Infinity;

@@ -38,27 +38,36 @@ type V3 = [number, number, number];
 /** Running sums: F (0-2), M about the origin (3-5), sum |F| (6), sum |M| (7). */
 type Sums = Float64Array;
 
-/** Adds a force f and a moment m acting at the point p (scalars: no allocation in the hot loop). */
-function apply(acc: Sums, p0: number, p1: number, p2: number, f0: number, f1: number, f2: number, m0: number, m1: number, m2: number): void {
+const pt = new Float64Array(3);
+const u = new Float64Array(3);
+/** The load being added: force (0-2) and moment (3-5), global. */
+const fm = new Float64Array(6);
+
+/** Adds the force and moment in fm acting at the point pt (scratch arrays: no allocation, no boxed
+ * numbers in the hot loop). */
+function apply(acc: Sums): void {
+  const p0 = pt[0];
+  const p1 = pt[1];
+  const p2 = pt[2];
+  const f0 = fm[0];
+  const f1 = fm[1];
+  const f2 = fm[2];
   const c0 = p1 * f2 - p2 * f1;
   const c1 = p2 * f0 - p0 * f2;
   const c2 = p0 * f1 - p1 * f0;
   acc[0] += f0;
   acc[1] += f1;
   acc[2] += f2;
-  acc[3] += c0 + m0;
-  acc[4] += c1 + m1;
-  acc[5] += c2 + m2;
+  acc[3] += c0 + fm[3];
+  acc[4] += c1 + fm[4];
+  acc[5] += c2 + fm[5];
   // magnitudes only scale the relative residuals
   acc[6] += Math.sqrt(f0 * f0 + f1 * f1 + f2 * f2);
-  const t0 = c0 + m0;
-  const t1 = c1 + m1;
-  const t2 = c2 + m2;
+  const t0 = c0 + fm[3];
+  const t1 = c1 + fm[4];
+  const t2 = c2 + fm[5];
   acc[7] += Math.sqrt(t0 * t0 + t1 * t1 + t2 * t2);
 }
-
-const pt = new Float64Array(3);
-const u = new Float64Array(3);
 
 /** Position of the point x along the element (displaced when deformed) into pt. */
 function pointAt(st: ElementState, x: number, deformed: boolean): void {
@@ -74,17 +83,23 @@ function pointAt(st: ElementState, x: number, deformed: boolean): void {
   }
 }
 
-/** A force (or a moment) given in element axes, acting at x along the element. */
-function applyLocal(acc: Sums, st: ElementState, deformed: boolean, x: number, q0: number, q1: number, q2: number, moment: boolean): void {
+/** The vector q (element axes) as a force, or as a moment, acting at x along the element. */
+function applyLocal(acc: Sums, st: ElementState, deformed: boolean, x: number, q: Float64Array, moment: boolean): void {
   pointAt(st, x, deformed);
   const R = st.pe.geo.R;
   // global = R^T local (toGlobal3), inline
-  const g0 = R[0] * q0 + R[3] * q1 + R[6] * q2;
-  const g1 = R[1] * q0 + R[4] * q1 + R[7] * q2;
-  const g2 = R[2] * q0 + R[5] * q1 + R[8] * q2;
-  if (moment) apply(acc, pt[0], pt[1], pt[2], 0, 0, 0, g0, g1, g2);
-  else apply(acc, pt[0], pt[1], pt[2], g0, g1, g2, 0, 0, 0);
+  const g0 = R[0] * q[0] + R[3] * q[1] + R[6] * q[2];
+  const g1 = R[1] * q[0] + R[4] * q[1] + R[7] * q[2];
+  const g2 = R[2] * q[0] + R[5] * q[1] + R[8] * q[2];
+  const o = moment ? 3 : 0;
+  fm.fill(0);
+  fm[o] = g0;
+  fm[o + 1] = g1;
+  fm[o + 2] = g2;
+  apply(acc);
 }
+
+const q = new Float64Array(3);
 
 export function staticsCheck(
   prep: PreparedModel,
@@ -104,7 +119,11 @@ export function staticsCheck(
     const o = n * 6;
     if (nodal[o] !== 0 || nodal[o + 1] !== 0 || nodal[o + 2] !== 0 || nodal[o + 3] !== 0 || nodal[o + 4] !== 0 || nodal[o + 5] !== 0) {
       const p = nodePos(n);
-      apply(acc, p[0], p[1], p[2], nodal[o], nodal[o + 1], nodal[o + 2], nodal[o + 3], nodal[o + 4], nodal[o + 5]);
+      pt[0] = p[0];
+      pt[1] = p[1];
+      pt[2] = p[2];
+      for (let c = 0; c < 6; c++) fm[c] = nodal[o + c];
+      apply(acc);
     }
   }
   for (const st of states) {
@@ -120,16 +139,17 @@ export function staticsCheck(
           // intensityAt (element-loads.ts), inline
           const t = l.b > l.a ? (x - l.a) / (l.b - l.a) : 0;
           const w = h * GAUSS3.w[g];
-          applyLocal(
-            acc, st, deformed, x,
-            (l.vA[0] + (l.vB[0] - l.vA[0]) * t) * w,
-            (l.vA[1] + (l.vB[1] - l.vA[1]) * t) * w,
-            (l.vA[2] + (l.vB[2] - l.vA[2]) * t) * w,
-            false,
-          );
+          q[0] = (l.vA[0] + (l.vB[0] - l.vA[0]) * t) * w;
+          q[1] = (l.vA[1] + (l.vB[1] - l.vA[1]) * t) * w;
+          q[2] = (l.vA[2] + (l.vB[2] - l.vA[2]) * t) * w;
+          applyLocal(acc, st, deformed, x, q, false);
         }
-      } else if (l.kind === 'force') applyLocal(acc, st, deformed, l.a, l.vA[0], l.vA[1], l.vA[2], false);
-      else applyLocal(acc, st, deformed, l.a, l.vA[0], l.vA[1], l.vA[2], true);
+      } else {
+        q[0] = l.vA[0];
+        q[1] = l.vA[1];
+        q[2] = l.vA[2];
+        applyLocal(acc, st, deformed, l.a, q, l.kind === 'moment');
+      }
     }
   }
   const F: V3 = [acc[0], acc[1], acc[2]];
