@@ -41,6 +41,8 @@ export interface ResolvedLoad {
   readonly local: Vec3;
   readonly a: number;
   readonly b: number;
+  /** Scaled loads already made, by factor (a combination factor recurs across combinations). */
+  readonly byFactor: Map<number, LocalLoad>;
 }
 
 /** Checks one element load and resolves its direction into local axes (once per load and model). */
@@ -54,29 +56,28 @@ export function resolveDirection(load: DistributedLoad | ElementPointLoad, R: Fl
     const a = position(load.a_m, L, what);
     const b = position(load.b_m, L, what);
     if (b < a) throw new Error(`${what}: end b_m before start a_m`);
-    return { load, local, a, b };
+    return { load, local, a, b, byFactor: new Map() };
   }
   const a = position(load.a_m, L, what);
-  return { load, local, a, b: a };
+  return { load, local, a, b: a, byFactor: new Map() };
 }
 
-/** A resolved load times its combination factor. */
+/** A resolved load times its combination factor (made once per factor; LocalLoad is immutable). */
 export function scaleResolved(r: ResolvedLoad, factor: number): LocalLoad {
+  let out = r.byFactor.get(factor);
+  if (!out) {
+    out = scaleOnce(r, factor);
+    r.byFactor.set(factor, out);
+  }
+  return out;
+}
+
+function scaleOnce(r: ResolvedLoad, factor: number): LocalLoad {
   const { load, local } = r;
   const scaled = (w: number): Vec3 => [local[0] * w * factor, local[1] * w * factor, local[2] * w * factor];
   if (load.kind === 'distributed') return { kind: 'distributed', a: r.a, b: r.b, vA: scaled(load.wA_Npm), vB: scaled(load.wB_Npm) };
   const v = scaled(load.value);
   return { kind: load.kind === 'point-force' ? 'force' : 'moment', a: r.a, b: r.a, vA: v, vB: v };
-}
-
-/** Resolves one element load (scaled by factor) into local components. */
-export function resolveElementLoad(
-  load: DistributedLoad | ElementPointLoad,
-  R: Float64Array,
-  L: number,
-  factor: number,
-): LocalLoad {
-  return scaleResolved(resolveDirection(load, R, L), factor);
 }
 
 export function isElementLoad(l: AppliedLoad): l is DistributedLoad | ElementPointLoad {
