@@ -19,13 +19,25 @@ export function rawPdfText(pdf: Uint8Array): string {
 
 /**
  * The numbers printed in one row of a titled table: the text from the row's id to the next
- * row's id (a line broken after a hyphen is joined again), every number in order.
+ * row's id (a line broken after a hyphen is joined again, page headers and footers left out),
+ * every number in order.
  */
 export function rowNumbers(raw: string, tableTitle: string, rowId: string, nextId: string): number[] {
+  // page furniture (the running header with the status, the footer with "page N of M") can fall
+  // between two rows of a table that continues on the next page
+  raw = raw
+    .split('\n')
+    .filter((line) => !/\bpage \d+ of \d+\b/.test(line) && !/DRAFT FOR REVIEW\s*$/.test(line))
+    .join('\n');
   const t0 = raw.indexOf(tableTitle);
   if (t0 < 0) throw new Error(`no table "${tableTitle}"`);
-  const end = raw.indexOf('\nTable ', t0 + tableTitle.length);
-  const region = raw.slice(t0 + tableTitle.length, end > 0 ? end : undefined).replace(/-\n/g, '-');
+  // the table's number, "Table 9.3 <title>"; the region runs over the pages the table continues on
+  // (where its title row is repeated) and ends at the next table's title (a page starts with a form feed)
+  const number = /Table (\S+)\s+$/.exec(raw.slice(Math.max(0, t0 - 40), t0))?.[1];
+  if (!number) throw new Error(`table "${tableTitle}" has no number before its title`);
+  const after = raw.slice(t0 + tableTitle.length);
+  const end = after.search(new RegExp(`\\n\\f?Table (?!${number.replace('.', '\\.')} )`));
+  const region = (end >= 0 ? after.slice(0, end) : after).split(`Table ${number} ${tableTitle}`).join('').replace(/-\n/g, '-');
   const a = region.indexOf(rowId);
   if (a < 0) throw new Error(`no row ${rowId} in table "${tableTitle}"`);
   const b = region.indexOf(nextId, a + rowId.length);
