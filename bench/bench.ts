@@ -3,6 +3,7 @@
 // 50 ms; solve time about linear in the number of segments (40 -> 640 segments, 16x, costing no
 // more than about 25x). Measured and printed only; never asserted.
 import { readdirSync } from 'node:fs';
+import { loadavg } from 'node:os';
 import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
 import { analyzeAll } from '../src/analysis/analyze.ts';
@@ -77,8 +78,13 @@ function stageTimes(file: string): StageTimes {
   };
 }
 
+/** Load average over the last minute against the number of cores: other work competing for them. */
+const load = (): string => `load average ${loadavg()[0]!.toFixed(2)}`;
+
 const examples = join(packageRoot(), 'examples');
 console.log(`polebook bench, Node ${process.version}: median (25th-75th percentile) of ${RUNS} runs after ${WARMUP} warm-up runs, ms`);
+console.log(`Machine at start: ${load()}. A load near or above the number of cores means other work shares them:`);
+console.log('medians and the upper percentiles then grow; the fastest run ("min") stays close to the cost of the code.');
 console.log(`\nPer example and stage. The ${TARGET_MS} ms target applies to "analysis": analyzeAll, every combination`);
 console.log('with P-delta as the example asks, stations and exact extremes. "first order" is the same without');
 console.log('P-delta, for comparison only; "pipeline" = frame + loads + analysis + modes.');
@@ -101,10 +107,11 @@ for (const { file, s } of rows) {
   const perCombo = s.analysis.median_ms / s.combos;
   const verdict = s.analysis.p75_ms < TARGET_MS ? 'under target' : 'OVER TARGET';
   console.log(
-    `  ${file.padEnd(22)} ${s.analysis.median_ms.toFixed(2).padStart(7)} ms (75th pct ${s.analysis.p75_ms.toFixed(2)}), ` +
-      `${perCombo.toFixed(2)} ms per combination, ${(TARGET_MS / s.analysis.median_ms).toFixed(1)}x headroom: ${verdict}`,
+    `  ${file.padEnd(22)} median ${s.analysis.median_ms.toFixed(2).padStart(6)} ms (75th pct ${s.analysis.p75_ms.toFixed(2)}, min ${s.analysis.min_ms.toFixed(2)}), ` +
+      `${perCombo.toFixed(2)} ms per combination, ${(TARGET_MS / s.analysis.median_ms).toFixed(1)}x headroom at the median: ${verdict}`,
   );
 }
+console.log(`Machine after the example runs: ${load()}.`);
 
 const SEGMENTS = [10, 40, 160, 640];
 console.log('\nSolve time against segments per member (tapered pole with two arms, first order;');

@@ -7,6 +7,8 @@ export interface Timing {
   /** 25th and 75th percentiles. */
   readonly p25_ms: number;
   readonly p75_ms: number;
+  /** Fastest run: the cost with the least interference from other work on the machine. */
+  readonly min_ms: number;
   readonly runs: number;
 }
 
@@ -19,7 +21,7 @@ export function quantile(sorted: readonly number[], q: number): number {
 
 export function summarise(times: readonly number[]): Timing {
   const s = [...times].sort((a, b) => a - b);
-  return { median_ms: quantile(s, 0.5), p25_ms: quantile(s, 0.25), p75_ms: quantile(s, 0.75), runs: s.length };
+  return { median_ms: quantile(s, 0.5), p25_ms: quantile(s, 0.25), p75_ms: quantile(s, 0.75), min_ms: s[0]!, runs: s.length };
 }
 
 /** Runs fn `warmup` times untimed (JIT), then `repeats` times timed. */

@@ -1,7 +1,7 @@
 // Stations along every member: ends, discontinuities, loads and a regular spacing (snapped), with
 // the internal forces and displacements at each, and the member's exact extremes.
 // The statics of a cut and the displacement interpolation are in internal-forces.ts.
-import type { FrameModel, MemberInfo } from '../model/frame.ts';
+import type { MemberInfo } from '../model/frame.ts';
 import type { EnvelopeComponent, MemberStations, Station, StationSide } from './analysis-types.ts';
 import { SNAP_M, type LocalLoad } from './element-loads.ts';
 import type { LoadSet, PreparedModel } from './frame-system.ts';
@@ -101,7 +101,6 @@ export function memberStations(
   member: MemberInfo,
   spacing_m: number | null,
 ): MemberStations {
-  const model: FrameModel = prep.model;
   const stations: Station[] = [];
   const acc = emptyExtremes();
   const ids = member.elements;
@@ -131,7 +130,7 @@ export function memberStations(
         node !== next.pe.el.i ||
         ls.nodesLoaded.has(node) ||
         prep.degree[node] > 2 ||
-        model.supports.some((s) => s.node === node) ||
+        prep.supported[node] === 1 ||
         nonZero(st.pe.el.offsetJ_m) ||
         nonZero(next.pe.el.offsetI_m) ||
         pointLoadNear(st, L) ||
