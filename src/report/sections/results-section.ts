@@ -127,55 +127,78 @@ function staticsBlocks(analysis: DesignAnalysis, d: Display): Block[] {
     ? 'In this second-order analysis the check is made in the deformed configuration: loads and supports at their displaced positions, so it also shows how closely the second-order equilibrium is met.'
     : 'In this first-order analysis the check is made on the undeformed structure.';
   const rows = analysis.combinations.map((c) => resultOf(analysis, c));
+  const share = (v: number | null) => (v === null ? '–' : `${formatNumber(v * 100, 3)} %`);
   const blocks: Block[] = [
     { kind: 'heading', level: 2, text: 'Statics check' },
     ...templateBlocks('statics-check', { configurationText }).blocks,
     {
       kind: 'table',
       title: 'Statics check: forces',
-      header: ['Combination', 'Applied ΣFx', 'Applied ΣFy', 'Applied ΣFz', 'Reactions ΣFx', 'Reactions ΣFy', 'Reactions ΣFz', '|Residual|'],
-      widths: [108, '*', '*', '*', '*', '*', '*', '*'],
+      header: ['Combination', 'Applied ΣFx', 'Applied ΣFy', 'Applied ΣFz', 'Reactions ΣFx', 'Reactions ΣFy', 'Reactions ΣFz', '|Residual|', 'Relative'],
+      widths: [100, '*', '*', '*', '*', '*', '*', '*', 38],
       rows: rows.map((r) => [
         r.combination,
         ...vecText(r.statics.appliedForce_N, 'force', d),
         ...vecText(r.statics.reactionForce_N, 'force', d),
         d.q(Math.hypot(...r.statics.residualForce_N), 'force'),
+        r.statics.relativeForceResidual.toExponential(1),
       ]),
+      note: `Configuration of the check: ${deformed ? 'deformed' : 'undeformed'}. Relative: |residual force| / Σ|applied forces| (dimensionless).`,
     },
     {
       kind: 'table',
       title: 'Statics check: moments about the origin',
-      header: ['Combination', 'Applied ΣMx', 'Applied ΣMy', 'Applied ΣMz', 'Reactions ΣMx', 'Reactions ΣMy', 'Reactions ΣMz', '|Residual|', 'Relative residual'],
-      widths: [100, '*', '*', '*', '*', '*', '*', '*', 40],
+      header: ['Combination', 'Applied ΣMx', 'Applied ΣMy', 'Applied ΣMz', 'Reactions ΣMx', 'Reactions ΣMy', 'Reactions ΣMz', '|Residual|', 'Relative', ...(deformed ? ['Share'] : [])],
+      widths: [96, '*', '*', '*', '*', '*', '*', '*', 38, ...(deformed ? [36] : [])],
       rows: rows.map((r) => [
         r.combination,
         ...vecText(r.statics.appliedMoment_Nm, 'moment', d),
         ...vecText(r.statics.reactionMoment_Nm, 'moment', d),
         d.q(Math.hypot(...r.statics.residualMoment_Nm), 'moment'),
-        r.statics.relativeResidual.toExponential(1),
+        r.statics.relativeMomentResidual.toExponential(1),
+        ...(deformed ? [share(r.statics.momentResidualShare)] : []),
       ]),
-      note: `Configuration of the check: ${deformed ? 'deformed' : 'undeformed'}. The relative residual is dimensionless.`,
+      note:
+        `Configuration of the check: ${deformed ? 'deformed' : 'undeformed'}. Relative: as defined above (dimensionless).` +
+        (deformed ? ' Share: |residual moment| / (Σ|applied forces| × largest node displacement), the part of the moment the displacements add that the method leaves unbalanced.' : ''),
     },
   ];
-  const worst = rows.reduce((a, b) => (b.statics.relativeResidual > a.statics.relativeResidual ? b : a));
-  const s = worst.statics;
-  if (s.relativeResidual > TINY_RESIDUAL) {
-    const rf = vecText(s.residualForce_N, 'force', d);
-    const rm = vecText(s.residualMoment_Nm, 'moment', d);
+  const worstBy = (key: (r: CombinationResult) => number) => rows.reduce((a, b) => (key(b) > key(a) ? b : a));
+  const wf = worstBy((r) => r.statics.relativeForceResidual);
+  const wm = worstBy((r) => r.statics.relativeMomentResidual);
+  if (wf.statics.relativeForceResidual > TINY_RESIDUAL) {
     blocks.push({
       kind: 'caution',
-      title: 'Statics residual is not negligible',
+      title: 'Force balance not met',
       text:
-        `The largest relative residual is ${s.relativeResidual.toExponential(2)}, under combination ${worst.combination}, in the ${s.configuration} configuration: ` +
-        `residual force (${rf.join(', ')}), residual moment (${rm.join(', ')}) about the origin. ` +
-        (s.configuration === 'deformed'
-          ? 'The second-order analysis represents the deformed geometry by a geometric stiffness built from the axial forces only (an axial force acting through the lateral displacements). ' +
-            'This check places every load and the support at its displaced position, so it also counts the moments of the loads about the displaced structure that such a geometric stiffness does not carry; ' +
-            'the residual is their size at these displacements. The checker judges whether it matters against the reactions above.'
-          : 'A first-order analysis should balance to round-off: the checker should find out why this one does not before using the results.'),
+        `Under combination ${wf.combination} the reactions do not balance the applied forces: relative force residual ${wf.statics.relativeForceResidual.toExponential(2)}, ` +
+        `residual (${vecText(wf.statics.residualForce_N, 'force', d).join(', ')}). The sum of forces balances to round-off in a correct analysis in either configuration; do not use these results before the cause is found.`,
+    });
+  }
+  if (wm.statics.relativeMomentResidual > TINY_RESIDUAL && wm.statics.configuration === 'deformed') {
+    const t = templateBlocks('statics-deformed', {
+      forceResidual: wf.statics.relativeForceResidual.toExponential(2),
+      forceCombination: wf.combination,
+      momentResidual: d.q(Math.hypot(...wm.statics.residualMoment_Nm), 'moment'),
+      momentCombination: wm.combination,
+      momentRelative: wm.statics.relativeMomentResidual.toExponential(2),
+      momentShare: share(wm.statics.momentResidualShare),
+      displacementMoment: d.q(wm.statics.displacementMoment_Nm, 'moment'),
+    });
+    blocks.push({ kind: 'caution', title: 'Statics residual in the deformed configuration', text: t.blocks.map((b) => (b.kind === 'paragraph' ? b.text : '')).join('\n\n') });
+  } else if (wm.statics.relativeMomentResidual > TINY_RESIDUAL) {
+    blocks.push({
+      kind: 'caution',
+      title: 'Moment balance not met',
+      text:
+        `Under combination ${wm.combination} the relative moment residual is ${wm.statics.relativeMomentResidual.toExponential(2)} on the undeformed structure, ` +
+        `residual moment (${vecText(wm.statics.residualMoment_Nm, 'moment', d).join(', ')}). A first-order analysis balances to round-off: do not use these results before the cause is found.`,
     });
   } else {
-    blocks.push({ kind: 'paragraph', text: `The largest relative residual is ${s.relativeResidual.toExponential(2)} (combination ${worst.combination}, ${s.configuration} configuration): equilibrium is met to round-off.` });
+    blocks.push({
+      kind: 'paragraph',
+      text: `Equilibrium is met to round-off: the largest relative force residual is ${wf.statics.relativeForceResidual.toExponential(2)} (${wf.combination}) and the largest relative moment residual ${wm.statics.relativeMomentResidual.toExponential(2)} (${wm.combination}), ${wm.statics.configuration} configuration.`,
+    });
   }
   return blocks;
 }
