@@ -246,10 +246,7 @@ function modeBlocks(analysis: DesignAnalysis, d: Display): Block[] {
   const sum: Vec3 = [total(0), total(1), total(2)];
   return [
     { kind: 'heading', level: 2, text: 'Natural frequencies' },
-    {
-      kind: 'paragraph',
-      text: 'Natural modes of the unloaded structure with lumped masses: half the steel mass of each element at each of its end nodes, and the mass of each attachment (weight / g) at its node. Rotational inertia is neglected.',
-    },
+    ...templateBlocks('natural-frequencies', {}).blocks,
     {
       kind: 'table',
       title: 'Natural frequencies, periods and effective mass ratios',

@@ -118,14 +118,7 @@ function convergenceBlocks(loaded: LoadedDesign, analysis: DesignAnalysis, d: Di
   const P_N = toSI(1, forceUnit, 'force');
   return [
     { kind: 'heading', level: 2, text: 'Segment convergence' },
-    {
-      kind: 'paragraph',
-      text:
-        `Each member is taken alone as a cantilever fixed at its root, with a load P = ${d.q(P_N, 'force')} at its tip square to its axis. ` +
-        'The tip deflection of the chain of prismatic elements used in the analysis, δ = Σ P [(L − s_k)³ − (L − s_k+1)³] / (3 E I_k), ' +
-        'is compared with that of the continuous taper, δ = ∫ P (L − s)² / (E I(s)) ds, integrated numerically (Gauss-Legendre, 400 panels). ' +
-        'A small difference shows that the segment count is enough for the stiffness of the members.',
-    },
+    ...templateBlocks('segment-convergence', { load: d.q(P_N, 'force') }).blocks,
     {
       kind: 'table',
       title: 'Tip deflection under a tip load: elements against the continuous taper',
