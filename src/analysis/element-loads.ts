@@ -2,7 +2,7 @@
 import type { AppliedLoad, DistributedLoad, ElementPointLoad } from '../loads/load-types.ts';
 import type { Vec3 } from '../model/frame.ts';
 import { toLocal3 } from './element-geometry.ts';
-import { GAUSS3, hermiteSlope } from './shape-functions.ts';
+import { GAUSS3, hermiteInto, hermiteSlope } from './shape-functions.ts';
 
 /** Positions closer than this are the same point (m). */
 export const SNAP_M = 1e-6;
@@ -86,20 +86,30 @@ export function isElementLoad(l: AppliedLoad): l is DistributedLoad | ElementPoi
 
 /** Intensity of a distributed load at x (inside [a, b]). */
 export function intensityAt(l: LocalLoad, x: number): Vec3 {
-  const t = l.b > l.a ? (x - l.a) / (l.b - l.a) : 0;
-  return [l.vA[0] + (l.vB[0] - l.vA[0]) * t, l.vA[1] + (l.vB[1] - l.vA[1]) * t, l.vA[2] + (l.vB[2] - l.vA[2]) * t];
+  const q = new Float64Array(3);
+  intensityInto(l, x, q);
+  return [q[0], q[1], q[2]];
 }
 
-/** Adds the work-equivalent end loads of a force (F0, F1, F2) at x (Hermite functions of
- * shape-functions.ts written out: this runs for every load of every combination). */
+/** intensityAt() written into out[0..2] (no allocation: it runs for every sample of every load). */
+export function intensityInto(l: LocalLoad, x: number, out: Float64Array): void {
+  const t = l.b > l.a ? (x - l.a) / (l.b - l.a) : 0;
+  out[0] = l.vA[0] + (l.vB[0] - l.vA[0]) * t;
+  out[1] = l.vA[1] + (l.vB[1] - l.vA[1]) * t;
+  out[2] = l.vA[2] + (l.vB[2] - l.vA[2]) * t;
+}
+
+const hn = new Float64Array(4);
+const qx = new Float64Array(3);
+
+/** Adds the work-equivalent end loads of a force (F0, F1, F2) at x. */
 function addForce(eq: Float64Array, F0: number, F1: number, F2: number, x: number, L: number, w: number): void {
   const s = x / L;
-  const s2 = s * s;
-  const s3 = s2 * s;
-  const n1 = 1 - 3 * s2 + 2 * s3;
-  const n2 = L * (s - 2 * s2 + s3);
-  const n3 = 3 * s2 - 2 * s3;
-  const n4 = L * (s3 - s2);
+  hermiteInto(x, L, hn);
+  const n1 = hn[0];
+  const n2 = hn[1];
+  const n3 = hn[2];
+  const n4 = hn[3];
   eq[0] += w * (1 - s) * F0;
   eq[6] += w * s * F0;
   eq[1] += w * n1 * F1;
@@ -125,12 +135,8 @@ export function fixedEndForces(loads: readonly LocalLoad[], L: number): Float64A
       if (half <= 0) continue;
       for (let g = 0; g < 3; g++) {
         const x = l.a + half * (1 + GAUSS3.t[g]);
-        // intensityAt, inline
-        const t = l.b > l.a ? (x - l.a) / (l.b - l.a) : 0;
-        const q0 = l.vA[0] + (l.vB[0] - l.vA[0]) * t;
-        const q1 = l.vA[1] + (l.vB[1] - l.vA[1]) * t;
-        const q2 = l.vA[2] + (l.vB[2] - l.vA[2]) * t;
-        addForce(eq, q0, q1, q2, x, L, GAUSS3.w[g] * half);
+        intensityInto(l, x, qx);
+        addForce(eq, qx[0], qx[1], qx[2], x, L, GAUSS3.w[g] * half);
       }
     } else if (l.kind === 'force') {
       addForce(eq, l.vA[0], l.vA[1], l.vA[2], l.a, L, 1);

@@ -13,10 +13,10 @@
 // displacements, plus the particular solution of the element's own loads with both ends held
 // (first order; in a second-order analysis that small in-element part is not amplified).
 import type { StationSide } from './analysis-types.ts';
-import { SNAP_M, type LocalLoad } from './element-loads.ts';
+import { intensityInto, SNAP_M, type LocalLoad } from './element-loads.ts';
 import type { PreparedElement } from './frame-system.ts';
 import { CHEB4, cubicThroughInto } from './polynomial.ts';
-import { GAUSS3 } from './shape-functions.ts';
+import { GAUSS3, localDisplacementInto } from './shape-functions.ts';
 
 export interface ElementState {
   readonly pe: PreparedElement;
@@ -31,6 +31,9 @@ export interface ElementState {
   readonly fixedEnd: Float64Array | null;
 }
 
+const disp = new Float64Array(3);
+const q = new Float64Array(3);
+
 /** 2-point Gauss abscissae: exact for a linear load and for (xi - x) times it. */
 const GAUSS2 = [-1 / Math.sqrt(3), 1 / Math.sqrt(3)] as const;
 
@@ -44,16 +47,9 @@ export function internalForcesInto(st: ElementState, x: number, side: StationSid
   let dv = 0;
   let dw = 0;
   if (N !== 0) {
-    // Hermite cubics (shape-functions.ts), the same arithmetic inline
-    const s = x / L;
-    const s2 = s * s;
-    const s3 = s2 * s;
-    const n1 = 1 - 3 * s2 + 2 * s3;
-    const n2 = L * (s - 2 * s2 + s3);
-    const n3 = 3 * s2 - 2 * s3;
-    const n4 = L * (s3 - s2);
-    dv = n1 * d[1] + n2 * d[5] + n3 * d[7] + n4 * d[11] - d[1];
-    dw = n1 * d[2] - n2 * d[4] + n3 * d[8] - n4 * d[10] - d[2];
+    localDisplacementInto(d, x, L, disp);
+    dv = disp[1] - d[1];
+    dw = disp[2] - d[2];
   }
   // M(x) = -(M_i + c_i + load moments), c_i = (r_i - r_x) x f_i with the axial force N of Kg
   let M0 = -f[3];
@@ -67,11 +63,10 @@ export function internalForcesInto(st: ElementState, x: number, side: StationSid
       const h = (c - l.a) / 2;
       for (let g = 0; g < 2; g++) {
         const xi = l.a + h * (1 + GAUSS2[g]);
-        // intensityAt (element-loads.ts), inline
-        const t = l.b > l.a ? (xi - l.a) / (l.b - l.a) : 0;
-        const q0 = l.vA[0] + (l.vB[0] - l.vA[0]) * t;
-        const q1 = l.vA[1] + (l.vB[1] - l.vA[1]) * t;
-        const q2 = l.vA[2] + (l.vB[2] - l.vA[2]) * t;
+        intensityInto(l, xi, q);
+        const q0 = q[0];
+        const q1 = q[1];
+        const q2 = q[2];
         const lever = xi - x;
         F0 -= h * q0;
         F1 -= h * q1;
@@ -102,20 +97,6 @@ export function internalForcesInto(st: ElementState, x: number, side: StationSid
   out[3] = M0;
   out[4] = M1;
   out[5] = M2;
-}
-
-/** Local displacement [u, v, w] at x from the end displacements (Hermite and linear), into out. */
-export function endInterpolationInto(d: ArrayLike<number>, x: number, L: number, out: Float64Array): void {
-  const s = x / L;
-  const s2 = s * s;
-  const s3 = s2 * s;
-  const n1 = 1 - 3 * s2 + 2 * s3;
-  const n2 = L * (s - 2 * s2 + s3);
-  const n3 = 3 * s2 - 2 * s3;
-  const n4 = L * (s3 - s2);
-  out[0] = (1 - s) * d[0] + s * d[6];
-  out[1] = n1 * d[1] + n2 * d[5] + n3 * d[7] + n4 * d[11];
-  out[2] = n1 * d[2] - n2 * d[4] + n3 * d[8] - n4 * d[10];
 }
 
 /** Breakpoints where the internal-force polynomials change: element ends and load starts/ends,

@@ -7,7 +7,6 @@ import { SNAP_M, type LocalLoad } from './element-loads.ts';
 import type { LoadSet, PreparedModel } from './frame-system.ts';
 import {
   addParticularDisplacement,
-  endInterpolationInto,
   heldPieces,
   internalForcesInto,
   pieceBreaks,
@@ -15,6 +14,7 @@ import {
   type HeldPieces,
 } from './internal-forces.ts';
 import { emptyExtremes, extremesRecord, updateExtremes } from './member-extremes.ts';
+import { localDisplacementInto } from './shape-functions.ts';
 
 export type { ElementState } from './internal-forces.ts';
 
@@ -23,7 +23,7 @@ const local = new Float64Array(3);
 
 function stationAt(st: ElementState, held: HeldPieces | null, x: number, side: StationSide, s: number): Station {
   internalForcesInto(st, x, side, forces);
-  endInterpolationInto(st.d, x, st.pe.geo.L, local);
+  localDisplacementInto(st.d, x, st.pe.geo.L, local);
   addParticularDisplacement(st, held, x, local);
   const R = st.pe.geo.R;
   // global = R^T local (toGlobal3). Frozen here, so the final deepFreeze skips the many stations.

@@ -4,10 +4,20 @@
 
 /** [N1, N2, N3, N4] at x on [0, L]: v = N1 v1 + N2 rz1 + N3 v2 + N4 rz2. */
 export function hermite(x: number, L: number): [number, number, number, number] {
+  const n = new Float64Array(4);
+  hermiteInto(x, L, n);
+  return [n[0], n[1], n[2], n[3]];
+}
+
+/** hermite() written into out[0..3] (no allocation: it runs for every station and load). */
+export function hermiteInto(x: number, L: number, out: Float64Array): void {
   const s = x / L;
   const s2 = s * s;
   const s3 = s2 * s;
-  return [1 - 3 * s2 + 2 * s3, L * (s - 2 * s2 + s3), 3 * s2 - 2 * s3, L * (s3 - s2)];
+  out[0] = 1 - 3 * s2 + 2 * s3;
+  out[1] = L * (s - 2 * s2 + s3);
+  out[2] = 3 * s2 - 2 * s3;
+  out[3] = L * (s3 - s2);
 }
 
 /** d/dx of hermite(). */
@@ -19,13 +29,20 @@ export function hermiteSlope(x: number, L: number): [number, number, number, num
 
 /** Local displacement [u, v, w] at x from the 12 local end displacements. */
 export function localDisplacementAt(d: ArrayLike<number>, x: number, L: number): [number, number, number] {
+  const u = new Float64Array(3);
+  localDisplacementInto(d, x, L, u);
+  return [u[0], u[1], u[2]];
+}
+
+const n4 = new Float64Array(4);
+
+/** localDisplacementAt() written into out[0..2]. */
+export function localDisplacementInto(d: ArrayLike<number>, x: number, L: number, out: Float64Array): void {
   const s = x / L;
-  const [n1, n2, n3, n4] = hermite(x, L);
-  return [
-    (1 - s) * d[0] + s * d[6],
-    n1 * d[1] + n2 * d[5] + n3 * d[7] + n4 * d[11],
-    n1 * d[2] - n2 * d[4] + n3 * d[8] - n4 * d[10],
-  ];
+  hermiteInto(x, L, n4);
+  out[0] = (1 - s) * d[0] + s * d[6];
+  out[1] = n4[0] * d[1] + n4[1] * d[5] + n4[2] * d[7] + n4[3] * d[11];
+  out[2] = n4[0] * d[2] - n4[1] * d[4] + n4[2] * d[8] - n4[3] * d[10];
 }
 
 /** Gauss-Legendre points and weights on [-1, 1]. */

@@ -30,8 +30,8 @@ import type { Reaction, StaticsCheck } from './analysis-types.ts';
 import { cross } from './element-geometry.ts';
 import type { LoadSet, PreparedModel } from './frame-system.ts';
 import type { ElementState } from './member-stations.ts';
-import { GAUSS3 } from './shape-functions.ts';
-import { endInterpolationInto } from './internal-forces.ts';
+import { GAUSS3, localDisplacementInto } from './shape-functions.ts';
+import { intensityInto } from './element-loads.ts';
 
 type V3 = [number, number, number];
 
@@ -76,7 +76,7 @@ function pointAt(st: ElementState, x: number, deformed: boolean): void {
   pt[1] = endI[1] + x * R[1];
   pt[2] = endI[2] + x * R[2];
   if (deformed) {
-    endInterpolationInto(st.d, x, L, u);
+    localDisplacementInto(st.d, x, L, u);
     pt[0] += R[0] * u[0] + R[3] * u[1] + R[6] * u[2];
     pt[1] += R[1] * u[0] + R[4] * u[1] + R[7] * u[2];
     pt[2] += R[2] * u[0] + R[5] * u[1] + R[8] * u[2];
@@ -136,12 +136,11 @@ export function staticsCheck(
         // deformed positions are cubic: 3-point Gauss keeps the moment exact
         for (let g = 0; g < 3; g++) {
           const x = l.a + h * (1 + GAUSS3.t[g]);
-          // intensityAt (element-loads.ts), inline
-          const t = l.b > l.a ? (x - l.a) / (l.b - l.a) : 0;
           const w = h * GAUSS3.w[g];
-          q[0] = (l.vA[0] + (l.vB[0] - l.vA[0]) * t) * w;
-          q[1] = (l.vA[1] + (l.vB[1] - l.vA[1]) * t) * w;
-          q[2] = (l.vA[2] + (l.vB[2] - l.vA[2]) * t) * w;
+          intensityInto(l, x, q);
+          q[0] *= w;
+          q[1] *= w;
+          q[2] *= w;
           applyLocal(acc, st, deformed, x, q, false);
         }
       } else {
