@@ -18,6 +18,8 @@ export type StepStatus = 'info' | 'ok' | 'fail' | 'warn';
 export interface CalcStep {
   readonly description: string;
   readonly symbol: string;
+  /** The formula, either as a right-hand side ("π/4 (D² − d²)") or as a whole equation
+   * ("A = π/4 (D² − d²)"); the report prints the symbol only once. */
   readonly formula: string;
   readonly substituted: Expr;
   readonly result: Qty;

@@ -21,12 +21,18 @@ const STATUS_MARK: Readonly<Record<StepStatus, { text: string; color: string }>>
   fail: { text: '✗ NOT OK', color: COLOR.fail },
 };
 
+/** The formula without a leading "symbol =" that would print the symbol twice ("d = d = D − 2t"). */
+export function formulaBody(step: CalcStep): string {
+  const lead = `${step.symbol} = `;
+  return step.formula.startsWith(lead) ? step.formula.slice(lead.length) : step.formula;
+}
+
 /** The step as one unbreakable block with a thin accent rule on its left. */
 export function stepContent(step: CalcStep, units: UnitSystem): Content {
   const mark = STATUS_MARK[step.status];
   const lines: Content[] = [
     { text: step.description, bold: true, margin: [0, 0, 0, 2] },
-    { text: [{ text: step.symbol, italics: true }, ' = ', step.formula] },
+    { text: [{ text: step.symbol, italics: true }, ' = ', formulaBody(step)] },
     { text: `= ${formatExpr(step.substituted, units)}`, margin: [10, 1, 0, 0] },
     { text: [`= `, { text: formatQty(step.result, units), bold: true }], margin: [10, 1, 0, 0] },
     { text: `Source: ${step.source}`, style: 'small', margin: [0, 3, 0, 0] },

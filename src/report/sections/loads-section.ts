@@ -1,6 +1,7 @@
 // Section "Loads as entered": wind pressures and directions, ice, fatigue and the load
 // combinations with their factors and sources, exactly as the design holds them.
-import type { CombinationCategory, FatigueInput, LoadedDesign, LoadKind } from '../../design/design.ts';
+import type { FatigueInput, LoadedDesign, LoadKind } from '../../design/design.ts';
+import { CATEGORY_TEXT } from './combination-labels.ts';
 import { formatNumber } from '../../units/units.ts';
 import type { Block, DocSection } from '../document.ts';
 import { display, type Display } from './display.ts';
@@ -8,13 +9,6 @@ import { templateBlocks } from './templates.ts';
 
 export const LOADS_TITLE = 'Loads as entered';
 
-const CATEGORY_LABEL: Readonly<Record<CombinationCategory, string>> = {
-  strength: 'strength',
-  'extreme-wind': 'extreme wind',
-  'extreme-ice': 'extreme wind with ice',
-  service: 'service',
-  fatigue: 'fatigue',
-};
 
 const LOAD_KINDS: readonly { kind: LoadKind; label: string }[] = [
   { kind: 'dead', label: 'Dead' },
@@ -100,7 +94,7 @@ export function loadsSection(loaded: LoadedDesign): DocSection {
     widths: [40, 48, '*', 28, 28, 28, 34, '*'],
     rows: design.combinations.map((c) => [
       c.id,
-      CATEGORY_LABEL[c.category],
+      CATEGORY_TEXT[c.category],
       c.description,
       ...LOAD_KINDS.map((k) => {
         const f = c.factors[k.kind];
