@@ -24,8 +24,9 @@ describe('linear solution properties on random frames', () => {
         const r = solveLoads(f.model, loads);
         // equilibrium to round-off. End forces come from k d; on the shortest elements the random
         // frames make (2.5 cm, axial stiffness EA/l ~ 1e13 N/m) the cancellation in EA/l (u_j - u_i)
-        // leaves up to about 2e-8 of the load scale (measured over 300 frames): bound 1e-7.
-        expect(r.statics.relativeResidual).toBeLessThan(1e-7);
+        // leaves up to about 3e-7 of the load scale (measured over 3000 frames, fast-check seed 42;
+        // a bound of 1e-7 failed about one run in 40): bound 1e-6.
+        expect(r.statics.relativeResidual).toBeLessThan(1e-6);
       }),
       { numRuns: RUNS },
     );
