@@ -29,7 +29,7 @@ describe('rootsIn (factor theorem)', () => {
   it('finds every simple root inside the interval, and none outside', () => {
     fc.assert(
       fc.property(
-        fc.uniqueArray(fc.double({ min: -0.98, max: 0.98, noNaN: true }), { minLength: 1, maxLength: 6, comparator: (a, b) => Math.abs(a - b) < 0.02 }),
+        fc.uniqueArray(fc.double({ min: -0.98, max: 0.98, noNaN: true }), { minLength: 1, maxLength: 5, comparator: (a, b) => Math.abs(a - b) < 0.1 }),
         fc.double({ min: 1.05, max: 3, noNaN: true }),
         fc.double({ min: 0.1, max: 1e6, noNaN: true }),
         (inside, outside, lead) => {
@@ -37,7 +37,8 @@ describe('rootsIn (factor theorem)', () => {
           const found = rootsIn(fromRoots(roots, lead), -1, 1);
           const want = [...inside].sort((a, b) => a - b);
           expect(found.length).toBe(want.length);
-          // 1e-9: roots separated by at least 0.02 are well conditioned at this degree
+          // 1e-9: roots at least 0.1 apart keep |p'(r)| >= 0.1 x 0.2 x 0.3 x 0.4 x lead, so round-off
+          // of about 1e-14 in p moves a root by far less
           found.forEach((r, k) => expect(Math.abs(r - want[k])).toBeLessThan(1e-9));
         },
       ),
