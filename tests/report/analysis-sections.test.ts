@@ -21,8 +21,8 @@ const UNIT_WEIGHT = 490 * LBF_N / FT_M ** 3; // N/m3: the default steel density 
 // Steel area of a round tube, exact: π/4 (D² − (D − 2t)²) = π t (D − t); linear in D, so a
 // tube tapering linearly weighs γ L π t (Dmean − t), and its weight per length is linear along it.
 const tubeWeightPerLength = (D_m: number, t_m: number) => UNIT_WEIGHT * Math.PI * t_m * (D_m - t_m);
-const pole = { H: 26 * FT_M, Droot: 18 * IN_M, taper: (0.14 * IN_M) / FT_M, t: 0.375 * IN_M };
-const arm = { z: 24 * FT_M, L: 36 * FT_M, Droot: 12.5 * IN_M, taper: (0.14 * IN_M) / FT_M, t: 0.3125 * IN_M };
+const pole = { H: 26 * FT_M, Droot: 24 * IN_M, taper: (0.14 * IN_M) / FT_M, t: 0.5 * IN_M };
+const arm = { z: 24 * FT_M, L: 36 * FT_M, Droot: 16 * IN_M, taper: (0.14 * IN_M) / FT_M, t: 0.375 * IN_M };
 const panels = [
   { W: 3.5 * PSF_PA * 12 * 7 * FT_M ** 2, s: 14 * FT_M, lateral: -10 * IN_M, area: 12 * 7 * FT_M ** 2 },
   { W: 3.5 * PSF_PA * 10 * 6 * FT_M ** 2, s: 29 * FT_M, lateral: -10 * IN_M, area: 10 * 6 * FT_M ** 2 },
