@@ -5,7 +5,7 @@ import { performance } from 'node:perf_hooks';
 import { assemble, buildLoadSet, factorOrThrow, loadVector, prepareModel } from '../src/analysis/frame-system.ts';
 import type { AppliedLoad } from '../src/loads/load-types.ts';
 import type { FrameElement, FrameModel, FrameNode, MemberInfo, Vec3 } from '../src/model/frame.ts';
-import { timeBatched, type Timing } from './timing.ts';
+import { summarise, timeBatched, type Timing } from './timing.ts';
 
 export interface ScalingRow {
   readonly segments: number;
@@ -76,8 +76,19 @@ export function benchFrame(n: number): { model: FrameModel; loads: AppliedLoad[]
 const SAMPLES = 61;
 const SAMPLE_MS = 4;
 
-export function scalingTable(segments: number[]): ScalingRow[] {
-  return segments.map((n) => {
+export interface ScalingTable {
+  readonly rows: readonly ScalingRow[];
+  /** Per sample round, time per run of each row over the reference row's (rows[k] / rows[ref]). */
+  readonly ratios: readonly (readonly number[])[];
+}
+
+/**
+ * Rows are sampled in turn, one sample of each per round, so every row meets the same conditions
+ * on a shared machine (a burst of other work, a garbage collection); the ratio of each round then
+ * compares like with like, and its median is the robust figure.
+ */
+export function scalingTable(segments: number[], reference: number): ScalingTable {
+  const cases = segments.map((n) => {
     const { model, loads } = benchFrame(n);
     const prep = prepareModel(model);
     const ls = buildLoadSet(prep, loads.map((load) => ({ load, factor: 1 })));
@@ -89,10 +100,21 @@ export function scalingTable(segments: number[]): ScalingRow[] {
       factorOrThrow(prep, K, undefined, false);
       K.solve(F);
     };
+    // warm-up (JIT) for about 50 ms, then five runs size the batch
+    for (let k = 0, w0 = performance.now(); k < 5 || performance.now() - w0 < 50; k++) once();
     const t0 = performance.now();
-    for (let k = 0; k < 5; k++) once(); // warm-up, also sizes the batch
+    for (let k = 0; k < 5; k++) once();
     const single = (performance.now() - t0) / 5;
     const batch = Math.max(1, Math.round(SAMPLE_MS / Math.max(single, 1e-3)));
-    return { segments: n, dof: prep.dofs.nEq, bandwidth: prep.dofs.bw, batch, solve: timeBatched(once, SAMPLES, batch, 0) };
+    return { n, prep, once, batch, times: [] as number[] };
   });
+  for (let r = 0; r < SAMPLES; r++) {
+    for (const c of cases) c.times.push(timeBatched(c.once, 1, c.batch, 0).median_ms);
+  }
+  const ref = cases.findIndex((c) => c.n === reference);
+  if (ref < 0) throw new Error(`scaling: reference ${reference} segments is not among the rows`);
+  return {
+    rows: cases.map((c) => ({ segments: c.n, dof: c.prep.dofs.nEq, bandwidth: c.prep.dofs.bw, batch: c.batch, solve: summarise(c.times) })),
+    ratios: cases.map((c) => c.times.map((t, r) => t / cases[ref].times[r])),
+  };
 }
