@@ -17,8 +17,9 @@ export function analysisSummaryLines(design: Design, a: DesignAnalysis): string[
     const worst = amplified.reduce((x, y) => ((y.baseMoment!.amplification ?? 0) > (x.baseMoment!.amplification ?? 0) ? y : x));
     lines.push(`  largest P-delta amplification of the base moment ${formatNumber(worst.baseMoment!.amplification!, 4)} under ${worst.combination}`);
   }
-  const worstStatics = Math.max(...results.map((r) => r.statics.relativeResidual));
-  lines.push(`  statics check: largest relative residual ${worstStatics.toExponential(1)}`);
+  const worstForce = Math.max(...results.map((r) => r.statics.relativeForceResidual));
+  const worstMoment = Math.max(...results.map((r) => r.statics.relativeMomentResidual));
+  lines.push(`  statics check: largest relative residual, forces ${worstForce.toExponential(1)}, moments ${worstMoment.toExponential(1)}${a.options.secondOrder ? ' (deformed configuration; see the package for the moment residual of the P-delta method)' : ''}`);
   if (a.modes.length > 0) lines.push(`  first natural frequency ${formatNumber(a.modes[0]!.frequency_Hz, 3)} Hz`);
   return lines;
 }
