@@ -121,6 +121,9 @@ function reactionBlocks(analysis: DesignAnalysis, d: Display): Block[] {
   return blocks;
 }
 
+/** The three components of a vector, one per line: x, y, z. */
+const componentLines = (xyz: readonly string[]): string => xyz.map((v, k) => `${'xyz'[k]}: ${v}`).join('\n');
+
 function staticsBlocks(analysis: DesignAnalysis, d: Display): Block[] {
   const deformed = analysis.options.secondOrder;
   const configurationText = deformed
@@ -134,12 +137,12 @@ function staticsBlocks(analysis: DesignAnalysis, d: Display): Block[] {
     {
       kind: 'table',
       title: 'Statics check: forces',
-      header: ['Combination', 'Applied ΣFx', 'Applied ΣFy', 'Applied ΣFz', 'Reactions ΣFx', 'Reactions ΣFy', 'Reactions ΣFz', '|Residual|', 'Relative'],
-      widths: [100, '*', '*', '*', '*', '*', '*', '*', 38],
+      header: ['Combination', 'Applied ΣFx, ΣFy, ΣFz', 'Reactions ΣFx, ΣFy, ΣFz', '|Residual|', 'Relative'],
+      widths: [110, '*', '*', '*', 44],
       rows: rows.map((r) => [
         r.combination,
-        ...vecText(r.statics.appliedForce_N, 'force', d),
-        ...vecText(r.statics.reactionForce_N, 'force', d),
+        componentLines(vecText(r.statics.appliedForce_N, 'force', d)),
+        componentLines(vecText(r.statics.reactionForce_N, 'force', d)),
         d.q(Math.hypot(...r.statics.residualForce_N), 'force'),
         r.statics.relativeForceResidual.toExponential(1),
       ]),
@@ -148,12 +151,12 @@ function staticsBlocks(analysis: DesignAnalysis, d: Display): Block[] {
     {
       kind: 'table',
       title: 'Statics check: moments about the origin',
-      header: ['Combination', 'Applied ΣMx', 'Applied ΣMy', 'Applied ΣMz', 'Reactions ΣMx', 'Reactions ΣMy', 'Reactions ΣMz', '|Residual|', 'Relative', ...(deformed ? ['Share'] : [])],
-      widths: [96, '*', '*', '*', '*', '*', '*', '*', 38, ...(deformed ? [36] : [])],
+      header: ['Combination', 'Applied ΣMx, ΣMy, ΣMz', 'Reactions ΣMx, ΣMy, ΣMz', '|Residual|', 'Relative', ...(deformed ? ['Share'] : [])],
+      widths: [110, '*', '*', '*', 44, ...(deformed ? [52] : [])],
       rows: rows.map((r) => [
         r.combination,
-        ...vecText(r.statics.appliedMoment_Nm, 'moment', d),
-        ...vecText(r.statics.reactionMoment_Nm, 'moment', d),
+        componentLines(vecText(r.statics.appliedMoment_Nm, 'moment', d)),
+        componentLines(vecText(r.statics.reactionMoment_Nm, 'moment', d)),
         d.q(Math.hypot(...r.statics.residualMoment_Nm), 'moment'),
         r.statics.relativeMomentResidual.toExponential(1),
         ...(deformed ? [share(r.statics.momentResidualShare)] : []),
