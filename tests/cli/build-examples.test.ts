@@ -67,6 +67,21 @@ describe.each(EXAMPLES)('polebook build examples/%s', (example) => {
     });
   });
 
+  it('keeps every word inside the page margins (nothing cut off at the right edge)', () => {
+    // Word boxes from poppler's pdftotext -bbox; the layout leaves 56 pt margins left and right.
+    const pdf = join(out, `${stem}.pdf`);
+    const html = execFileSync('pdftotext', ['-bbox', pdf, '-'], { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
+    const pages = html.split('<page ').slice(1);
+    const outside: string[] = [];
+    pages.forEach((page, k) => {
+      const width = Number(/width="([\d.]+)"/.exec(page)![1]);
+      for (const m of page.matchAll(/<word xMin="([\d.]+)" yMin="[\d.]+" xMax="([\d.]+)" yMax="[\d.]+">([^<]*)<\/word>/g)) {
+        if (Number(m[1]) < 56 - 2 || Number(m[2]) > width - 56 + 2) outside.push(`page ${k + 1}: '${m[3]}' at x ${m[1]}..${m[2]} of ${width}`);
+      }
+    });
+    expect(outside).toEqual([]);
+  });
+
   it('gives the same bytes on a second build, in another time zone and locale', () => {
     const again = mkdtempSync(join(tmpdir(), `polebook-${stem}-again-`));
     build(example, again, { TZ: 'Pacific/Chatham', LANG: 'de_DE.UTF-8', LC_ALL: 'de_DE.UTF-8' });
