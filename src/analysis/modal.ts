@@ -63,6 +63,54 @@ function combine(Y: readonly Float64Array[], Q: Matrix, col: number, n: number):
   return x;
 }
 
+/**
+ * Mass-orthonormalises the iterated vectors Y (with K Y = MX kept true by applying the same
+ * operations to MX), replacing any vector that has become dependent on the others by a fresh
+ * one. Without this, a frame with one very heavy attachment drives several trial vectors into
+ * the same direction and the projected mass matrix stops being positive definite.
+ */
+function keepIndependent(
+  Y: Float64Array[],
+  MX: Float64Array[],
+  mv: Float64Array,
+  solve: (mx: Float64Array) => Float64Array,
+  rnd: () => number,
+): void {
+  const n = mv.length;
+  for (let b = 0; b < Y.length; b++) {
+    for (let attempt = 0; ; attempt++) {
+      const y = Y[b];
+      const mx = MX[b];
+      const norm0 = Math.sqrt(dotW(y, mv, y));
+      // Two passes of Gram-Schmidt against the vectors already accepted (twice is enough).
+      for (let pass = 0; pass < 2; pass++) {
+        for (let a = 0; a < b; a++) {
+          const c = dotW(Y[a], mv, y);
+          const ya = Y[a];
+          const mxa = MX[a];
+          for (let k = 0; k < n; k++) {
+            y[k] -= c * ya[k];
+            mx[k] -= c * mxa[k];
+          }
+        }
+      }
+      const norm = Math.sqrt(dotW(y, mv, y));
+      if (norm > 1e-9 * norm0 && norm > 0) {
+        for (let k = 0; k < n; k++) {
+          y[k] /= norm;
+          mx[k] /= norm;
+        }
+        break;
+      }
+      if (attempt === 5) throw new Error('modal analysis: could not find independent trial vectors');
+      const fresh = new Float64Array(n);
+      for (let k = 0; k < n; k++) fresh[k] = mv[k] * rnd();
+      MX[b] = fresh;
+      Y[b] = solve(fresh);
+    }
+  }
+}
+
 function subspace(prep: PreparedModel, mv: Float64Array, p: number, q: number): { lambdas: number[]; vectors: Float64Array[] } {
   const K = assemble(prep, null);
   const n = K.n;
@@ -92,6 +140,7 @@ function subspace(prep: PreparedModel, mv: Float64Array, p: number, q: number): 
       return mx;
     });
     const Y = MX.map((mx) => K.solve(mx));
+    keepIndependent(Y, MX, mv, (mx) => K.solve(mx), rnd);
     const Kr = new Matrix(q, q);
     const Mr = new Matrix(q, q);
     for (let a = 0; a < q; a++) {
