@@ -15,16 +15,14 @@
 //   so polebook's reactions are checked against statics of the loads ccx solved (one fixed
 //   support makes the frame statically determinate).
 import { describe, expect, it } from 'vitest';
-import type { FrameModel, Vec3, Vec6 } from '../../src/model/frame.ts';
-import type { NodalLoad } from '../../src/loads/load-types.ts';
-import { solveLoads } from '../../src/analysis/analyze.ts';
+import type { FrameModel, Vec3 } from '../../src/model/frame.ts';
 import { buildFrame } from '../../src/model/build-frame.ts';
 import { makeDesign, roundSection, testArm, deg } from '../model/design-factory.ts';
 import { FrameSketch, nodalLoad, type TubeProps } from './calculix/frame-sketch.ts';
 import { roundTubeSection } from './calculix/pipe-from-section.ts';
-import { runCalculix } from './calculix/run-calculix.ts';
+import { compareWithCalculix as compare, type Comparison } from './calculix/compare.ts';
 import { ccxAvailableOrSkip } from './calculix/has-ccx.ts';
-import { add, norm, scale, sub } from './calculix/vec3.ts';
+import { add, scale } from './calculix/vec3.ts';
 
 const ccxPresent = ccxAvailableOrSkip();
 
@@ -39,61 +37,6 @@ const tube = (D_m: number, t_m: number): TubeProps => ({ E_Pa, G_Pa, ...roundTub
 /** n prismatic segments of a linear taper, each with the diameter at its middle. */
 const taper = (root_m: number, tip_m: number, wall_m: number, n: number): TubeProps[] =>
   Array.from({ length: n }, (_, k) => tube(root_m + ((tip_m - root_m) * (k + 0.5)) / n, wall_m));
-
-const translation = (u: Vec6): Vec3 => [u[0], u[1], u[2]];
-
-interface Comparison {
-  readonly worstNode: number;
-  /** max over nodes of |u_polebook - u_ccx| / max over nodes of |u_ccx|. */
-  readonly worstOfFrame: number;
-  /** |u_polebook - u_ccx| / |u_ccx| at each key node, for translations and for rotations. */
-  readonly keyNodes: readonly { node: number; error: number; rotationError: number }[];
-  readonly reactionForceError: number;
-  readonly reactionMomentError: number;
-}
-
-async function compare(name: string, model: FrameModel, loads: readonly NodalLoad[], keyNodes: readonly number[]): Promise<Comparison> {
-  const ccx = await runCalculix(model, loads, { rotationProbes: keyNodes });
-  const pb = solveLoads(model, loads);
-  const biggest = Math.max(...ccx.translations_m.map(norm));
-  let worstOfFrame = 0;
-  let worstNode = -1;
-  model.nodes.forEach((n) => {
-    const e = norm(sub(translation(pb.displacements[n.id]!), ccx.translations_m[n.id]!)) / biggest;
-    if (e > worstOfFrame) {
-      worstOfFrame = e;
-      worstNode = n.id;
-    }
-  });
-  const key = keyNodes.map((node) => {
-    const rot = ccx.rotations_rad.get(node)!;
-    const u = pb.displacements[node]!;
-    return {
-      node,
-      error: norm(sub(translation(u), ccx.translations_m[node]!)) / norm(ccx.translations_m[node]!),
-      rotationError: norm(sub([u[3], u[4], u[5]], rot)) / norm(rot),
-    };
-  });
-  const expected = ccx.reactions[0]!;
-  const got = pb.reactions.find((r) => r.node === expected.node);
-  if (got === undefined) throw new Error(`${name}: polebook gives no reaction at node ${expected.node}`);
-  const part = (v: Vec6, k: number): Vec3 => [v[k], v[k + 1], v[k + 2]];
-  const relErr = (a: Vec3, b: Vec3): number => norm(sub(a, b)) / norm(b);
-  const result: Comparison = {
-    worstNode,
-    worstOfFrame,
-    keyNodes: key,
-    reactionForceError: relErr(part(got.force, 0), part(expected.force, 0)),
-    reactionMomentError: relErr(part(got.force, 3), part(expected.force, 3)),
-  };
-  const pct = (x: number): string => `${(100 * x).toFixed(3)} %`;
-  console.info(
-    `[CalculiX] ${name}: frame worst ${pct(result.worstOfFrame)} (node ${worstNode}); key nodes ` +
-      key.map((k) => `${k.node}: ${pct(k.error)} (rotation ${pct(k.rotationError)})`).join(', ') +
-      `; reaction force ${pct(result.reactionForceError)}, moment ${pct(result.reactionMomentError)}`,
-  );
-  return result;
-}
 
 function expectWithinTolerances(c: Comparison): void {
   expect(c.worstOfFrame).toBeLessThan(DISPLACEMENT_TOL);

@@ -40,3 +40,25 @@ export function roundTubeSection(outerDiameter_m: number, wall_m: number): { A_m
   const I_m4 = (Math.PI / 4) * (R ** 4 - Ri ** 4);
   return { A_m2, I_m4, J_m4: 2 * I_m4 };
 }
+
+/**
+ * A pipe for a tube whose torsion constant is not 2 I, e.g. a multisided (polygonal) tube: the
+ * annulus with the same A and I, and the factor J / (2 I) by which the member's shear modulus is
+ * scaled so that ccx's torsional stiffness G' J_pipe = G' 2 I equals the member's G J. The material
+ * is orthotropic with axis 1 along the member, and torsion of a tube strains only the 1-2 and 1-3
+ * shear planes, the same moduli that carry transverse shear: so the one side effect is that the
+ * shear deformation (which Euler-Bernoulli leaves out, a few tenths of a percent of the bending
+ * deflection) changes by the same factor, e.g. 1/0.977 for a 12-sided tube. Iy must still equal Iz.
+ */
+export function pipeWithTorsionFactor(
+  A_m2: number,
+  Iy_m4: number,
+  Iz_m4: number,
+  J_m4: number,
+): { pipe: PipeSection; shearModulusFactor: number } {
+  const shearModulusFactor = J_m4 / (2 * Iy_m4);
+  if (!(shearModulusFactor > 0) || !Number.isFinite(shearModulusFactor)) {
+    throw new Error(`CalculiX harness: torsion constant J=${J_m4} cannot be matched`);
+  }
+  return { pipe: pipeFromSection(A_m2, Iy_m4, Iz_m4, 2 * Iy_m4), shearModulusFactor };
+}

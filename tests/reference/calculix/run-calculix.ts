@@ -1,26 +1,29 @@
 // Runs ccx on a FrameModel in a fresh temporary folder and reads back the translations of
 // every frame node. ccx prints no rotations for expanded beams: rotations are recovered only
 // at the nodes asked for, from two rigid probe stubs each (see write-input.ts).
-// Reactions come from statics (see statics.ts).
+// Reactions come from statics of the loads in the deck (see statics.ts).
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { performance } from 'node:perf_hooks';
 import type { FrameModel, Vec3, Vec6 } from '../../../src/model/frame.ts';
-import type { NodalLoad } from '../../../src/loads/load-types.ts';
+import type { AppliedLoad } from '../../../src/loads/load-types.ts';
 import { buildCalculixDeck, ccxNodeId, type CalculixDeckOptions, type RotationProbe } from './write-input.ts';
 import { cross, dot, scale, sub, unit, add } from './vec3.ts';
 import { parseDatDisplacements } from './parse-dat.ts';
-import { reactionsByStatics } from './statics.ts';
+import { reactionsFromPointForces } from './statics.ts';
 
 export interface CalculixResult {
   /** Translations [ux, uy, uz] of each frame node, indexed by frame node id. */
   readonly translations_m: readonly Vec3[];
-  /** Support reactions by statics of the same loads (single fixed support only). */
+  /** Support reactions by statics of the concentrated loads written in the deck (single fixed support only). */
   readonly reactions: readonly { node: number; force: Vec6 }[];
   /** Rotations [rx, ry, rz] of the nodes given in options.rotationProbes. */
   readonly rotations_rad: ReadonlyMap<number, Vec3>;
   readonly deck: string;
+  /** Wall time of the ccx process (spawn to exit, including its file input and output), ms. */
+  readonly ccxWall_ms: number;
 }
 
 export interface RunOptions extends CalculixDeckOptions {
@@ -31,19 +34,21 @@ export interface RunOptions extends CalculixDeckOptions {
 
 export async function runCalculix(
   model: FrameModel,
-  loads: readonly NodalLoad[],
+  loads: readonly AppliedLoad[],
   options: RunOptions = {},
 ): Promise<CalculixResult> {
-  const { deck, probes } = buildCalculixDeck(model, loads, options);
+  const { deck, probes, pointForces } = buildCalculixDeck(model, loads, options);
   const dir = mkdtempSync(join(tmpdir(), 'polebook-ccx-'));
   try {
     writeFileSync(join(dir, 'frame.inp'), deck);
+    const t0 = performance.now();
     const run = spawnSync('ccx', ['-i', 'frame'], {
       cwd: dir,
       encoding: 'utf8',
       timeout: options.timeout_ms ?? 60_000,
       env: { ...process.env, OMP_NUM_THREADS: '1', CCX_NPROC_EQUATION_SOLVER: '1' },
     });
+    const ccxWall_ms = performance.now() - t0;
     const log = `${run.stdout ?? ''}${run.stderr ?? ''}`;
     if (run.error !== undefined || run.status !== 0 || !log.includes('Job finished') || /\*ERROR/.test(log)) {
       const err = log.split('\n').filter((l) => /ERROR|error/.test(l)).slice(0, 5).join('\n');
@@ -64,7 +69,7 @@ export async function runCalculix(
       };
       rotations_rad.set(probes[k]!.frameNode, rotationFromProbes(probes[k]!.direction, at(probes[k]!), probes[k + 1]!.direction, at(probes[k + 1]!)));
     }
-    return { translations_m, reactions: reactionsByStatics(model, loads), rotations_rad, deck };
+    return { translations_m, reactions: reactionsFromPointForces(model, pointForces), rotations_rad, deck, ccxWall_ms };
   } finally {
     if (options.keepFiles !== true) rmSync(dir, { recursive: true, force: true });
   }
