@@ -16,6 +16,7 @@ import { buildFrame } from '../src/model/build-frame.ts';
 import { packageRoot } from '../src/package-root.ts';
 import { scalingTable } from './scaling.ts';
 import { fmtTiming, summarise, type Timing } from './timing.ts';
+import { printCalculixComparison } from './calculix-compare.ts';
 
 const RUNS = 41;
 const WARMUP = 5;
@@ -134,3 +135,5 @@ console.log(
     `${top.p25_ms.toFixed(1)}x-${top.p75_ms.toFixed(1)}x). Target: no more than about 25x: ` +
     `${top.p75_ms <= 25 ? 'met' : top.median_ms <= 25 ? 'met at the median' : 'NOT MET'}.`,
 );
+
+await printCalculixComparison();

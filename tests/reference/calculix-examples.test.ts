@@ -32,11 +32,11 @@ import { describe, expect, it } from 'vitest';
 import { loadDesignFile } from '../../src/input/index.ts';
 import { analyseDesign } from '../../src/analyse-design.ts';
 import { combinedLoads } from '../../src/analysis/analyze.ts';
-import type { Combination } from '../../src/loads/load-types.ts';
 import { packageRoot } from '../../src/package-root.ts';
 import { applyFactors } from './calculix/factored-loads.ts';
 import { compareWithCalculix } from './calculix/compare.ts';
 import { ccxAvailableOrSkip } from './calculix/has-ccx.ts';
+import { combinationsToCompare } from './calculix/combinations-to-compare.ts';
 
 const ccxPresent = ccxAvailableOrSkip();
 
@@ -45,21 +45,6 @@ const REACTION_TOL = 0.005; // issue: reactions within 0.5 %
 
 const EXAMPLES_DIR = join(packageRoot(), 'examples');
 const EXAMPLES = readdirSync(EXAMPLES_DIR).filter((f) => /\.ya?ml$/.test(f)).sort();
-
-/** The combinations compared: the one with dead load alone, and the first extreme-wind one per wind direction. */
-export function combinationsToCompare(cases: readonly { id: string; kind: string; windAngle_rad: number | null }[], combos: readonly Combination[]): Combination[] {
-  const kindOf = (caseId: string): string | undefined => cases.find((c) => c.id === caseId)?.kind;
-  const deadOnly = combos.filter((c) => c.factors.every((f) => kindOf(f.caseId) === 'dead'));
-  const seen = new Set<string>();
-  const wind = combos.filter((c) => {
-    if (c.category !== 'extreme-wind') return false;
-    const windCase = c.factors.map((f) => f.caseId).find((id) => kindOf(id) === 'wind');
-    if (windCase === undefined || seen.has(windCase)) return false;
-    seen.add(windCase);
-    return true;
-  });
-  return [...deadOnly.slice(0, 1), ...wind];
-}
 
 describe('examples found', () => {
   it('has examples to compare', () => {
