@@ -38,7 +38,9 @@ const uniq = (xs: string[]): string[] => [...new Set(xs)];
 /** Explains a quantity that could not be read, for the diagnostic. */
 export function quantityProblem(raw: number | string, dim: Dim, system: UnitSystem): string | undefined {
   const r = parseQuantity(raw, dim, system);
-  if (r.ok) return undefined;
+  if (r.ok && Number.isFinite(r.si)) return undefined;
+  // "1e999" reads as a number but overflows to Infinity, which no quantity can be.
+  if (r.ok) return `'${String(raw)}' is too large to be ${withArticle(DIM_NAMES[dim])}; expected a finite number, e.g. "${example(dim, system)}"`;
   const expected = uniq(unitSymbols(dim)).join(', ');
   const name = DIM_NAMES[dim];
   if (r.reason === 'syntax') {
