@@ -8,8 +8,9 @@
 //   height; its first element reaches the pole face through a rigid offset (offsetI_m),
 //   horizontal, of length equal to the pole's outside radius there (across flats / 2).
 // - Local axes: pole elements take refVector = global X (local y = X, z = Y); arm
-//   elements take refVector = global Z (local y in the vertical plane of the arm,
-//   z horizontal). Round and regular multisided tubes have Iy = Iz.
+//   elements take the upward normal to the arm in its vertical plane (global Z for a
+//   horizontal arm), so local y lies in the vertical plane of the arm and z is horizontal
+//   for any rise short of vertical. Round and regular multisided tubes have Iy = Iz.
 // - Segment properties: the section at the segment's mid-length (see segment-properties.ts;
 //   it converged faster than the flexibility-equivalent element in the convergence study,
 //   tests/model/segment-convergence.test.ts). The steel mass per length is the segment's
@@ -40,7 +41,17 @@ export interface BuildFrameOptions {
 export const RECOMMENDED_SEGMENTS_PER_MEMBER = 20;
 
 export const POLE_REF_VECTOR: Vec3 = [1, 0, 0];
-export const ARM_REF_VECTOR: Vec3 = [0, 0, 1];
+
+/** Reference vector of an arm's elements: the upward normal to the arm axis in its vertical
+ * plane. Global Z made square to the axis gives the same local y, but Z itself becomes parallel
+ * to a steeply rising arm; this normal never does. */
+export function armRefVector(ax: MemberAxis): Vec3 {
+  const [dx, dy, dz] = ax.direction;
+  const horizontal = Math.hypot(dx, dy);
+  if (horizontal === 0) return [1, 0, 0];
+  // + 0 turns a -0 into 0, so a horizontal arm has exactly global Z.
+  return [(-dz * dx) / horizontal + 0, (-dz * dy) / horizontal + 0, horizontal];
+}
 
 /** Weight of an attachment (panel: weight per area times face area). */
 export function attachmentWeight_N(a: Attachment): number {
@@ -70,7 +81,7 @@ export function buildFrame(design: Design, opts: BuildFrameOptions = {}): FrameM
     design.attachments.filter((a) => a.member === member).map((a) => ({ s_m: a.position_m, tag: `attachment:${a.id}` }));
 
   const addMember = (ax: MemberAxis, stations: readonly Station[], rootNode: number | null, rootOffset: Vec3) => {
-    const ref = ax.kind === 'pole' ? POLE_REF_VECTOR : ARM_REF_VECTOR;
+    const ref = ax.kind === 'pole' ? POLE_REF_VECTOR : armRefVector(ax);
     if (norm(cross(ax.direction, ref)) < 1e-3) throw new RangeError(`member ${ax.id} is parallel to its reference vector`);
     const at: { s_m: number; node: number }[] = [];
     stations.forEach((st, k) => {

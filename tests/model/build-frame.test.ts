@@ -59,8 +59,37 @@ describe('buildFrame: geometry and numbering', () => {
     }
   });
 
-  it('reference vectors: global X for the pole, global Z for arms', () => {
-    for (const e of model.elements) expect(e.refVector).toEqual(e.member === 'pole' ? [1, 0, 0] : [0, 0, 1]);
+  it('reference vectors: global X for the pole; for arms the upward normal in the vertical plane of the arm (global Z when horizontal)', () => {
+    for (const e of model.elements) {
+      if (e.member === 'pole') {
+        expect(e.refVector).toEqual([1, 0, 0]);
+        continue;
+      }
+      const arm = design.arms.find((a) => a.id === e.member)!;
+      // Expected from the geometry of the arm: the unit normal to its axis in its vertical plane, pointing up.
+      const s = Math.sin(arm.rise_rad);
+      const c = Math.cos(arm.rise_rad);
+      const expected = [-s * Math.cos(arm.direction_rad), -s * Math.sin(arm.direction_rad), c];
+      e.refVector.forEach((v, k) => close(v, expected[k]!));
+      if (arm.rise_rad === 0) expect(e.refVector).toEqual([0, 0, 1]);
+    }
+  });
+
+  it('builds an arm rising nearly vertically: its reference vector stays square to the axis (found by tests/fuzz)', () => {
+    // Mutated input: rise 89.999999 deg made global Z parallel to the arm and stopped the build.
+    const steep = makeDesign({ arms: [testArm({ rise_rad: deg(89.999999) })] });
+    const m = buildFrame(steep, { segmentsPerMember: 4 });
+    const arm = m.elements.filter((e) => e.member !== 'pole');
+    expect(arm.length).toBeGreaterThan(0);
+    for (const e of arm) {
+      const a = m.nodes[e.i].xyz_m;
+      const b = m.nodes[e.j].xyz_m;
+      const axis = [0, 1, 2].map((k) => b[k]! + e.offsetJ_m[k]! - a[k]! - e.offsetI_m[k]!);
+      const len = Math.hypot(axis[0]!, axis[1]!, axis[2]!);
+      const dot = axis.reduce((sum, v, k) => sum + v * e.refVector[k]!, 0) / len;
+      expect(Math.abs(dot)).toBeLessThan(1e-9);
+      expect(Math.hypot(...e.refVector)).toBeCloseTo(1, 12);
+    }
   });
 
   it('has a segment boundary at every attachment and arm connection, listed as a discontinuity', () => {
