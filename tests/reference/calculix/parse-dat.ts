@@ -8,25 +8,29 @@ export function parseFortranNumber(s: string): number {
   return Number(m[1]) * 10 ** Number(m[2] ?? 0);
 }
 
-/** Node id -> [vx, vy, vz] from the last displacement block(s) of the file. */
+/** Node id -> [vx, vy, vz] from the last displacement block(s) of the file (a nonlinear step prints one
+ * block per increment; later blocks overwrite earlier ones). */
 export function parseDatDisplacements(dat: string): Map<number, [number, number, number]> {
   const result = new Map<number, [number, number, number]>();
   let inBlock = false;
+  let inThisBlock = 0; // rows read since the last header (the blank line after a header is not the end)
   for (const line of dat.split(/\r?\n/)) {
     if (/^\s*displacements \(vx,vy,vz\)/.test(line)) {
       inBlock = true;
+      inThisBlock = 0;
       continue;
     }
     if (!inBlock) continue;
     const parts = line.trim().split(/\s+/);
     if (line.trim() === '') {
-      if (result.size > 0) inBlock = false;
+      if (inThisBlock > 0) inBlock = false;
       continue;
     }
     if (parts.length !== 4 || !/^\d+$/.test(parts[0] ?? '')) {
       inBlock = false;
       continue;
     }
+    inThisBlock++;
     result.set(Number(parts[0]), [parseFortranNumber(parts[1]!), parseFortranNumber(parts[2]!), parseFortranNumber(parts[3]!)]);
   }
   return result;

@@ -12,7 +12,7 @@ import type { AppliedLoad } from '../../../src/loads/load-types.ts';
 import { buildCalculixDeck, ccxNodeId, type CalculixDeckOptions, type RotationProbe } from './write-input.ts';
 import { cross, dot, scale, sub, unit, add } from './vec3.ts';
 import { parseDatDisplacements } from './parse-dat.ts';
-import { reactionsFromPointForces } from './statics.ts';
+import { reactionsFromPointForces, type PointForce } from './statics.ts';
 
 export interface CalculixResult {
   /** Translations [ux, uy, uz] of each frame node, indexed by frame node id. */
@@ -22,6 +22,10 @@ export interface CalculixResult {
   /** Rotations [rx, ry, rz] of the nodes given in options.rotationProbes. */
   readonly rotations_rad: ReadonlyMap<number, Vec3>;
   readonly deck: string;
+  /** Every concentrated force in the deck at its undeformed point, and every printed ccx node's
+   * translation (all nodes with printAllNodes), for statics in the deformed configuration. */
+  readonly pointForces: readonly PointForce[];
+  readonly ccxTranslations_m: ReadonlyMap<number, Vec3>;
   /** Wall time of the ccx process (spawn to exit, including its file input and output), ms. */
   readonly ccxWall_ms: number;
 }
@@ -69,7 +73,7 @@ export async function runCalculix(
       };
       rotations_rad.set(probes[k]!.frameNode, rotationFromProbes(probes[k]!.direction, at(probes[k]!), probes[k + 1]!.direction, at(probes[k + 1]!)));
     }
-    return { translations_m, reactions: reactionsFromPointForces(model, pointForces), rotations_rad, deck, ccxWall_ms };
+    return { translations_m, reactions: reactionsFromPointForces(model, pointForces), rotations_rad, deck, ccxWall_ms, pointForces, ccxTranslations_m: disp };
   } finally {
     if (options.keepFiles !== true) rmSync(dir, { recursive: true, force: true });
   }

@@ -13,6 +13,8 @@ import { add, cross, sub } from './vec3.ts';
 export interface PointForce {
   readonly xyz_m: Vec3;
   readonly F_N: Vec3;
+  /** The ccx node it acts on, when it comes from a deck. */
+  readonly ccxNode?: number;
 }
 
 export function reactionsFromPointForces(model: FrameModel, forces: readonly PointForce[]): { node: number; force: Vec6 }[] {

@@ -43,6 +43,10 @@ export interface CalculixDeckOptions {
    * J / (2 I) so the torsional stiffness G J matches (pipe-from-section.ts says what else that moves).
    */
   readonly torsion?: 'refuse' | 'scale-shear-modulus';
+  /** Geometrically nonlinear step (*STEP, NLGEOM), loads keeping their global direction. */
+  readonly nlgeom?: boolean;
+  /** Print the translations of every ccx node (for statics in the deformed configuration). */
+  readonly printAllNodes?: boolean;
 }
 
 export const DEFAULT_DECK_OPTIONS: Required<CalculixDeckOptions> = {
@@ -52,6 +56,8 @@ export const DEFAULT_DECK_OPTIONS: Required<CalculixDeckOptions> = {
   coupleArm_m: 1,
   rotationProbes: [],
   torsion: 'refuse',
+  nlgeom: false,
+  printAllNodes: false,
 };
 
 /** Frame node id -> ccx node id. */
@@ -333,7 +339,7 @@ export function buildCalculixDeck(
   const cload: string[] = [];
   const pointForces: PointForce[] = [];
   for (const [node, F] of [...forces.entries()].sort((p, q) => p[0] - q[0])) {
-    pointForces.push({ xyz_m: nodeXyz.get(node)!, F_N: F });
+    pointForces.push({ xyz_m: nodeXyz.get(node)!, F_N: F, ccxNode: node });
     F.forEach((v, d) => {
       if (v !== 0) cload.push(`${node}, ${d + 1}, ${field(v)}`);
     });
@@ -348,10 +354,9 @@ export function buildCalculixDeck(
     ...frameSet,
     ...sections,
     ...(boundary.length > 0 ? ['*BOUNDARY', ...boundary] : []),
-    '*STEP',
-    '*STATIC',
+    ...(opt.nlgeom ? ['*STEP, NLGEOM, INC=100', '*STATIC', '0.5, 1.'] : ['*STEP', '*STATIC']),
     ...(cload.length > 0 ? ['*CLOAD', ...cload] : []),
-    '*NODE PRINT, NSET=NPRINT',
+    `*NODE PRINT, NSET=${opt.printAllNodes ? 'NALL' : 'NPRINT'}`,
     'U',
     '*END STEP',
     '',
