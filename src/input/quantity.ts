@@ -1,7 +1,8 @@
 // Zod schemas for quantities as typed in the input: a bare number in the unit system's
 // default unit, or a string with its unit ("28 ft", "3.5 psf"). The output is SI.
 import { z } from 'zod';
-import { SYSTEM_UNIT, UNITS, parseQuantity, unitSymbols, type Dim, type UnitSystem } from '../units/units.ts';
+import { SYSTEM_UNIT, UNITS, formatQuantity, parseQuantity, unitSymbols, type Dim, type UnitSystem } from '../units/units.ts';
+import { PHYSICAL_LIMIT_SI } from './physical-limits.ts';
 
 export const DIM_NAMES: Readonly<Record<Dim, string>> = {
   length: 'length',
@@ -86,6 +87,11 @@ export function quantity(dim: Dim, system: UnitSystem, bound: Bound, text: strin
       const si = r.ok ? r.si : NaN;
       if ((bound === 'positive' && !(si > 0)) || (bound === 'nonNegative' && !(si >= 0))) {
         ctx.addIssue({ code: 'custom', message: `must be ${boundText(bound)}, got ${String(raw)}` });
+        return z.NEVER;
+      }
+      if (Math.abs(si) > PHYSICAL_LIMIT_SI[dim]) {
+        const limit = formatQuantity(PHYSICAL_LIMIT_SI[dim], dim, system);
+        ctx.addIssue({ code: 'custom', message: `${String(raw)} is beyond any pole-and-arm support (at most ${limit} in magnitude, a limit of ours); check the value and its unit` });
         return z.NEVER;
       }
       return si;

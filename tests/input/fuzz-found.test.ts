@@ -46,3 +46,43 @@ describe('values that read as numbers but are not finite', () => {
     expect(d.message).toContain('too large');
   });
 });
+
+describe('values beyond any pole-and-arm support are refused at their key', () => {
+  it('an offset of 1e300 ft (it gave infinite moments) names the key and the limit', () => {
+    const text = swap(SIGN, 'offset: { lateral: "-10 in", vertical: "-6 in" }', 'offset: { lateral: 1e300, vertical: "-6 in" }');
+    const d = firstError(text);
+    expect(d.path).toBe('attachments.panels[0].offset.lateral');
+    expect({ line: d.line, col: d.col }).toEqual(where(text, '1e300'));
+    expect(d.message).toContain('beyond any pole-and-arm support');
+    expect(d.message).toContain('3281 ft'); // 1000 m / 0.3048 m/ft (NIST SP 811 exact factor) = 3280.8 ft
+  });
+
+  it('a tube of 1e300 in (its area overflowed to NaN) is refused', () => {
+    const d = firstError(swap(SIGN, 'rootDiameter: 24      # in', 'rootDiameter: 1e300   # in'));
+    expect(d.path).toBe('structure.pole.section.rootDiameter');
+    expect(d.message).toContain('393.7 in'); // 10 m / 0.0254 m/in (NIST SP 811 exact factor)
+  });
+
+  it('the limit on lengths is 1000 m: a 1000 m pole passes it, 1001 m does not', () => {
+    const messages = (height: string) => {
+      try {
+        loadDesignText(swap(TWIN, 'height: 10              # m', `height: ${height}`), 'x.yaml', {});
+        return [];
+      } catch (e) {
+        return (e as InputError).diagnostics.map((d) => `${d.path}: ${d.message}`);
+      }
+    };
+    expect(messages('1000').filter((m) => m.includes('beyond any'))).toEqual([]);
+    expect(messages('1001').filter((m) => m.includes('beyond any'))).toEqual([expect.stringMatching(/^structure\.pole\.height: /)]);
+  });
+
+  it('a station spacing that asks for more than 10 000 stations on a member is refused', () => {
+    const text = swap(SIGN, 'stationSpacing: 1 ft', 'stationSpacing: 1e-9 ft');
+    const d = firstError(text);
+    expect(d.path).toBe('analysis.stationSpacing');
+    expect({ line: d.line, col: d.col }).toEqual(where(text, '1e-9 ft'));
+    expect(d.message).toContain('more than 10000 result stations');
+    // 36 ft / 10 000 = 0.0036 ft is accepted (the arm is the longest member).
+    expect(() => loadDesignText(swap(SIGN, 'stationSpacing: 1 ft', 'stationSpacing: 0.0036 ft'), 'x.yaml', {})).not.toThrow();
+  });
+});
