@@ -54,6 +54,10 @@ export function userCombinations(list: readonly CombinationInput[], hasIce: bool
       problems.push(error(['combinations', i, 'factors', key], 'a factor on ice needs an ice block under loads (loads.ice)'));
     }
     if (Object.keys(factors).length === 0) problems.push(error(['combinations', i, 'factors'], 'give at least one factor (dead, wind, ice, iceWind)'));
+    // All zero: the combination applies no load and would be left out unseen (found by tests/fuzz).
+    else if (Object.values(factors).every((f) => f === 0)) {
+      problems.push(error(['combinations', i, 'factors'], 'every factor is 0, so this combination applies no load; give a non-zero factor or remove the combination'));
+    }
     return { id: c.id, category: c.category, description: c.description ?? describeFactors(factors), factors, source: 'input' };
   });
 }

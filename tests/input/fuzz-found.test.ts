@@ -86,3 +86,18 @@ describe('values beyond any pole-and-arm support are refused at their key', () =
     expect(() => loadDesignText(swap(SIGN, 'stationSpacing: 1 ft', 'stationSpacing: 0.0036 ft'), 'x.yaml', {})).not.toThrow();
   });
 });
+
+describe('combinations', () => {
+  it('a combination whose factors are all 0 is refused at its factors (it was dropped unseen, and with no combination left the report stopped)', () => {
+    const text = swap(SIGN, 'combinations: default       # the labelled default set; or a list with your own factors', 'combinations:\n  - { id: c1, category: strength, factors: { dead: 0, wind: 0 } }');
+    const d = firstError(text);
+    expect(d.path).toBe('combinations[0].factors');
+    expect({ line: d.line, col: d.col }).toEqual(where(text, '{ dead: 0'));
+    expect(d.message).toContain('every factor is 0');
+  });
+
+  it('one zero factor beside a non-zero one is fine', () => {
+    const text = swap(SIGN, 'combinations: default       # the labelled default set; or a list with your own factors', 'combinations:\n  - { id: c1, category: strength, factors: { dead: 0, wind: 1 } }');
+    expect(loadDesignText(text, 'x.yaml', {}).design.combinations.map((c) => c.id)).toEqual(['c1']);
+  });
+});
