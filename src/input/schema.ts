@@ -200,7 +200,7 @@ function analysisSchema(system: UnitSystem) {
     segmentsPerMember: z.int({ error: 'expected a whole number' }).min(1, { error: 'at least 1' }).max(200, { error: 'at most 200' }).optional().meta({ description: defaultNote('segments') }),
     secondOrder: z.boolean().optional().meta({ description: `true: P-delta analysis. ${defaultNote('secondOrder')}` }),
     pDeltaTolerance: factor(`Relative change of displacements that ends the P-delta iteration. ${defaultNote('pDeltaTolerance')}`, 0, 0.01, false).optional(),
-    pDeltaMaxIterations: z.int({ error: 'expected a whole number' }).min(1, { error: 'at least 1' }).max(1000, { error: 'at most 1000' }).optional().meta({ description: defaultNote('pDeltaMaxIterations') }),
+    pDeltaMaxIterations: z.int({ error: 'expected a whole number' }).min(2, { error: 'at least 2: the iteration compares each solution with the one before, starting from the first-order one' }).max(1000, { error: 'at most 1000' }).optional().meta({ description: defaultNote('pDeltaMaxIterations') }),
     stationSpacing: quantity('length', system, 'positive', `Regular spacing of result stations. ${defaultNote('stationSpacing')}`).optional(),
   });
 }

@@ -101,3 +101,13 @@ describe('combinations', () => {
     expect(loadDesignText(text, 'x.yaml', {}).design.combinations.map((c) => c.id)).toEqual(['c1']);
   });
 });
+
+describe('analysis settings', () => {
+  it('a P-delta iteration cap of 1 is refused at its key (the analysis needs two solutions to compare, and stopped with an internal error)', () => {
+    const text = swap(SIGN, '  secondOrder: true\n', '  secondOrder: true\n  pDeltaMaxIterations: 1\n');
+    const d = firstError(text);
+    expect(d.path).toBe('analysis.pDeltaMaxIterations');
+    expect(d.message).toContain('at least 2');
+    expect(() => loadDesignText(swap(SIGN, '  secondOrder: true\n', '  secondOrder: true\n  pDeltaMaxIterations: 2\n'), 'x.yaml', {})).not.toThrow();
+  });
+});
