@@ -1,7 +1,7 @@
 // Bug hunt: many more mutated inputs than the test runs, reporting every distinct failure.
-// Run: npx tsx tests/fuzz/hunt.ts <seed> <runs per source> [--cli N]
+// Run: npx tsx tests/fuzz/hunt.ts <seed> <runs per source> [--cli N] [--odd-but-valid] [--show-unstable]
 import fc from 'fast-check';
-import { mutationsArb } from './mutate.ts';
+import { mutationsArb, oddButValidMutationsArb } from './mutate.ts';
 import { FUZZ_SOURCES, mutatedText } from './sources.ts';
 import { runCliCase, runLibrary } from './run-case.ts';
 
@@ -12,7 +12,8 @@ const cliRuns = cliAt > 0 ? Number(process.argv[cliAt + 1]) : 0;
 const counts: Record<string, number> = {};
 const failures = new Map<string, string>();
 for (const [si, source] of FUZZ_SOURCES.entries()) {
-  const cases = fc.sample(mutationsArb, { seed: seed * 101 + si, numRuns: runs });
+  const arb = process.argv.includes('--odd-but-valid') ? oddButValidMutationsArb : mutationsArb;
+  const cases = fc.sample(arb, { seed: seed * 101 + si, numRuns: runs });
   for (const [ci, muts] of cases.entries()) {
     const { text, done } = mutatedText(source, muts);
     const o = ci < cliRuns ? await runCliCase(text, source.name) : runLibrary(text, source.name);

@@ -28,7 +28,10 @@ export type Mutation =
   | { readonly op: 'angle'; readonly at: number; readonly value: number }
   | { readonly op: 'rise-89'; readonly at: number }
   | { readonly op: 'wall-near-radius'; readonly at: number; readonly fraction: number }
-  | { readonly op: 'empty'; readonly at: number; readonly list: boolean };
+  | { readonly op: 'empty'; readonly at: number; readonly list: boolean }
+  | { readonly op: 'clone'; readonly at: number }
+  | { readonly op: 'spring-base'; readonly stiffness: number }
+  | { readonly op: 'analysis'; readonly key: string; readonly value: Json };
 
 const idx = fc.nat({ max: 10_000 });
 export const mutationArb: fc.Arbitrary<Mutation> = fc.oneof(
@@ -46,8 +49,26 @@ export const mutationArb: fc.Arbitrary<Mutation> = fc.oneof(
   fc.record({ op: fc.constant('empty' as const), at: idx, list: fc.boolean() }),
 );
 
+/** Mutations that mostly keep the input valid but odd: the analysis side of the promise. */
+export const oddButValidArb: fc.Arbitrary<Mutation> = fc.oneof(
+  fc.record({ op: fc.constant('scale' as const), at: idx, factor: fc.constantFrom(0.5, 2, 10, 0.1, 3, 0.01) }),
+  fc.record({ op: fc.constant('move-attachment' as const), at: idx, fraction: fc.constantFrom(0, 0.5, 1, 0.999999, 0.01, 1e-9), member: idx }),
+  fc.record({ op: fc.constant('angle' as const), at: idx, value: fc.nat({ max: ODD_ANGLES.length - 1 }) }),
+  fc.record({ op: fc.constant('rise-89' as const), at: idx }),
+  fc.record({ op: fc.constant('wall-near-radius' as const), at: idx, fraction: fc.constantFrom(0.999999, 0.9, 0.01, 1e-6) }),
+  fc.record({ op: fc.constant('sides' as const), at: idx, sides: fc.constantFrom(8, 12, 16) }),
+  fc.record({ op: fc.constant('clone' as const), at: idx }),
+  fc.record({ op: fc.constant('spring-base' as const), stiffness: fc.constantFrom(1e-9, 1, 1000, 1e6, 1e9) }),
+  fc.record({
+    op: fc.constant('analysis' as const),
+    key: fc.constantFrom('segmentsPerMember', 'pDeltaMaxIterations', 'pDeltaTolerance', 'secondOrder', 'stationSpacing'),
+    value: fc.constantFrom<Json>(1, 2, 200, 1e-12, 0.01, false, '0.01 ft', '100 ft'),
+  }),
+);
+
 /** One to three mutations per case. */
 export const mutationsArb = fc.array(mutationArb, { minLength: 1, maxLength: 3 });
+export const oddButValidMutationsArb = fc.array(oddButValidArb, { minLength: 1, maxLength: 4 });
 
 const isMap = (v: unknown): v is { [k: string]: Json } => v !== null && typeof v === 'object' && !Array.isArray(v);
 
@@ -205,6 +226,28 @@ export function applyMutation(root: Json, m: Mutation): string {
       if (smallest === undefined || !(smallest > 0)) return 'wall: no size';
       s.wall = (smallest / 2) * m.fraction;
       return `${p.join('.')}.wall = ${m.fraction} of the radius`;
+    }
+    case 'clone': {
+      // A copy of an arm or an attachment under a new id: two members or loads at one place.
+      const p = pick([...armPaths(root), ...attachmentPaths(root)], m.at);
+      if (!p) return 'clone: none';
+      const list = get(root, p.slice(0, -1)) as Json[];
+      const copy = structuredClone(get(root, p)) as { [k: string]: Json };
+      copy.id = `${String(copy.id)}-copy`;
+      list.push(copy);
+      return `clone ${p.join('.')}`;
+    }
+    case 'spring-base': {
+      const pole = get(root, ['structure', 'pole']);
+      if (!isMap(pole)) return 'spring-base: no pole';
+      pole.base = { fixity: 'rotational-spring', rotationalStiffness: m.stiffness };
+      return `rotational-spring base, ${m.stiffness}`;
+    }
+    case 'analysis': {
+      if (!isMap(root)) return 'analysis: no root';
+      const a = isMap(root.analysis) ? root.analysis : (root.analysis = {});
+      a[m.key] = structuredClone(m.value);
+      return `analysis.${m.key} = ${JSON.stringify(m.value)}`;
     }
     case 'empty': {
       const containers = allPaths(root).filter((p) => typeof get(root, p) === 'object' && get(root, p) !== null);
