@@ -1,7 +1,7 @@
 // Reading an input file: YAML (or JSON) text -> schema -> normalised Design, with every
 // problem located at its line and column and reported at once.
 import { createHash } from 'node:crypto';
-import { LineCounter, parseDocument } from 'yaml';
+import { LineCounter, isAlias, parseDocument, visit, type Document } from 'yaml';
 import type { Design, LoadedDesign } from '../design/design.ts';
 import { InputError, type Diagnostic } from '../errors.ts';
 import type { UnitSystem } from '../units/units.ts';
@@ -53,7 +53,7 @@ function loadFromText(original: string, file: string, hash: string, env: LoadEnv
   if (doc.errors.length > 0) {
     throw new InputError(uniquePlaces(sortByPlace(doc.errors.map((e) => yamlErrorDiagnostic(e, text, lines, file)))));
   }
-  const data: unknown = doc.toJS({ maxAliasCount: 100 });
+  const data: unknown = toData(doc, text, lines, file);
   if (data === null || data === undefined) {
     throw new InputError([{ file, line: 1, col: 1, path: '', message: 'the file is empty; expected an input starting with formatVersion: 1 (`polebook new <kind>` writes a starter)', severity: 'error' }]);
   }
@@ -71,6 +71,28 @@ function loadFromText(original: string, file: string, hash: string, env: LoadEnv
   const warns = sortByPlace(all.filter((d) => d.severity === 'warning'));
   if (errors.length > 0 || !design) throw new InputError([...errors, ...warns]);
   return { design: design as Design, file, text: original, inputHash: hash, warnings: warns };
+}
+
+/** Most aliases a file may expand: an input needs few, and a chain of aliases of aliases grows
+ * exponentially (yaml refuses it with an exception, which must not reach the user as a crash). */
+const MAX_ALIAS_COUNT = 100;
+
+function toData(doc: Document.Parsed, text: string, lines: LineCounter, file: string): unknown {
+  try {
+    return doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT });
+  } catch (e) {
+    if (!(e instanceof ReferenceError)) throw e;
+    let offset = 0;
+    visit(doc, {
+      Alias(_key, node) {
+        if (isAlias(node) && node.range) offset = node.range[0];
+        return visit.BREAK;
+      },
+    });
+    const pos = lines.linePos(offset);
+    const message = `the aliases (*name) expand to too many nodes (${e.message}); write the values out, or use fewer aliases of aliases`;
+    throw new InputError([{ file, line: pos.line, col: pos.col, path: formatPath(textPath(text, offset)), message, severity: 'error' }]);
+  }
 }
 
 /** A .json file is held to JSON's own rules (no trailing commas, no comments). */

@@ -111,3 +111,19 @@ describe('analysis settings', () => {
     expect(() => loadDesignText(swap(SIGN, '  secondOrder: true\n', '  secondOrder: true\n  pDeltaMaxIterations: 2\n'), 'x.yaml', {})).not.toThrow();
   });
 });
+
+describe('YAML features', () => {
+  it('aliases of aliases that expand past the alias limit are an input error at the first alias (yaml threw, an internal error)', () => {
+    const text = 'a: &a [1, 1, 1, 1, 1, 1, 1, 1, 1, 1]\nb: &b [*a, *a, *a, *a, *a, *a, *a, *a, *a, *a]\nc: [*b, *b, *b, *b, *b, *b, *b, *b, *b, *b]\n';
+    const d = firstError(text);
+    expect({ line: d.line, col: d.col }).toEqual(where(text, '*a'));
+    expect(d.message).toContain('aliases (*name) expand to too many nodes');
+  });
+
+  it('a few aliases are still fine', () => {
+    const text = swap(SIGN, '    - id: S2', '    - id: S3\n      on: A1\n      position: 6\n      width: 2\n      height: 2\n      weightPerArea: 3.5\n      offset: &off { lateral: "-10 in", vertical: "-6 in" }\n    - id: S2');
+    const aliased = swap(text, 'offset: { lateral: "-10 in", vertical: "-6 in" }\n\nloads', 'offset: *off\n\nloads');
+    const s2 = loadDesignText(aliased, 'x.yaml', {}).design.attachments.find((a) => a.id === 'S2')!;
+    expect(s2.offset.lateral_m).toBeCloseTo(-10 * 0.0254, 12); // NIST SP 811: 1 in = 0.0254 m exactly
+  });
+});
