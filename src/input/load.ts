@@ -145,7 +145,9 @@ function yamlErrorDiagnostic(e: { message: string; pos: [number, number]; code: 
   }
   const start = lines.linePos(offset);
   // yaml's message ends with a code excerpt after the first line; keep the first line.
-  const first = e.message.split('\n')[0].replace(/ at line \d+, column \d+:?$/, '');
+  const raw = e.message.split('\n')[0].replace(/ at line \d+, column \d+:?$/, '');
+  // The parser runs out of stack on brackets nested a thousand deep: say what that means.
+  const first = /Maximum call stack size exceeded/.test(raw) ? 'the value is nested too deeply to read (lists or blocks inside each other)' : raw;
   const hint = YAML_HINTS[e.code] ?? '';
   return { file, line: start.line, col: start.col, path: formatPath(textPath(text, offset, nextLine)), message: `${first}${hint}`, severity: 'error' };
 }

@@ -65,12 +65,19 @@ function boundText(bound: Bound): string {
   return bound === 'positive' ? 'greater than 0' : 'at least 0';
 }
 
+const QUANTITY_MARK = ', or a string with a unit, e.g. ';
+
+/** Whether a schema description is one written by quantityDescription (a quantity key). */
+export function isQuantityDescription(description: string | undefined): boolean {
+  return description !== undefined && description.includes(QUANTITY_MARK);
+}
+
 /** What the JSON Schema says about a quantity key. */
 export function quantityDescription(dim: Dim, text: string): string {
   const us = SYSTEM_UNIT.us[dim];
   const si = SYSTEM_UNIT.si[dim];
   const units = us === si ? (us === '' ? 'a number' : `a number in ${us}`) : `a number in ${us} (units: us) or ${si} (units: si)`;
-  return `${text}. ${DIM_NAMES[dim][0].toUpperCase()}${DIM_NAMES[dim].slice(1)}: ${units}, or a string with a unit, e.g. "${example(dim, 'us')}"`;
+  return `${text}. ${DIM_NAMES[dim][0].toUpperCase()}${DIM_NAMES[dim].slice(1)}: ${units}${QUANTITY_MARK}"${example(dim, 'us')}"`;
 }
 
 /** A quantity key: number | "number unit" in, SI number out. */

@@ -1,6 +1,6 @@
 // Turns zod issues into plain-English problems: "what is wrong, what was expected".
-import type { z } from 'zod';
-import { describeValue } from './quantity.ts';
+import { z } from 'zod';
+import { describeValue, isQuantityDescription } from './quantity.ts';
 import { error, type InputPath, type Problem } from './problem.ts';
 import { closest, suggestKey } from './suggest.ts';
 
@@ -78,6 +78,22 @@ export function schemaAt(root: AnySchema, data: unknown, path: InputPath): AnySc
   return s;
 }
 
+/** Whether the key at `path` is a quantity (read by quantity() in quantity.ts), found by its description. */
+function isQuantityAt(root: AnySchema, data: unknown, path: InputPath): boolean {
+  if (path.length === 0) return false;
+  const parent = schemaAt(root, data, path.slice(0, -1));
+  if (!parent) return true;
+  const last = path[path.length - 1];
+  const def = parent._zod.def as unknown as { type: string; element?: AnySchema };
+  let field: AnySchema | undefined = typeof last === 'number' ? def.element : objectShape(parent)?.[last];
+  while (field) {
+    if (isQuantityDescription(z.globalRegistry.get(field)?.description)) return true;
+    const inner = field._zod.def as unknown as { type: string; innerType?: AnySchema };
+    field = inner.type === 'optional' || inner.type === 'default' || inner.type === 'nullable' ? inner.innerType : undefined;
+  }
+  return false;
+}
+
 function knownKeys(root: AnySchema, data: unknown, path: InputPath): string[] {
   const s = schemaAt(root, data, path);
   return s ? Object.keys(objectShape(s) ?? {}) : [];
@@ -124,6 +140,8 @@ export function issueToProblems(issue: Issue, data: unknown, root: AnySchema, pr
       const kinds = issue.errors.flatMap((b) => b.filter((sub) => sub.path.length === 0).map((sub) => (sub.code === 'invalid_type' ? sub.expected : sub.code === 'invalid_value' ? sub.values.map(fmt).join(' or ') : '')));
       const set = new Set(kinds);
       if (set.has('number') && set.has('string') && set.size === 2) {
+        // Quantities and plain text (names, ids) both take a string or a number.
+        if (!isQuantityAt(root, data, path)) return [error(path, `expected text or a number, got ${describeValue(value)}`)];
         return [error(path, `expected a number or a number with a unit (e.g. "12.5 ft"), got ${describeValue(value)}`)];
       }
       return [error(path, `expected ${joinOr([...set].filter((k) => k !== '').map((k) => (k.startsWith("'") ? k : expectedText(k))))}, got ${describeValue(value)}`)];

@@ -127,3 +127,24 @@ describe('YAML features', () => {
     expect(s2.offset.lateral_m).toBeCloseTo(-10 * 0.0254, 12); // NIST SP 811: 1 in = 0.0254 m exactly
   });
 });
+
+describe('messages for odd values', () => {
+  it('a text key given a block says it expects text, not a number with a unit', () => {
+    const d = firstError(swap(SIGN, 'name: County Road 17 guide signs, eastbound', 'name: { a: 1 }'));
+    expect(d.path).toBe('project.name');
+    expect(d.message).toBe('expected text or a number, got a block of keys');
+  });
+
+  it('a quantity key given a list still asks for a number with a unit', () => {
+    const d = firstError(swap(SIGN, 'width: 10\n', 'width: [10]\n'));
+    expect(d.path).toBe('attachments.panels[1].width');
+    expect(d.message).toContain('expected a number or a number with a unit');
+  });
+
+  it('brackets nested a thousand deep are a located input error that says so (the parser ran out of stack)', () => {
+    const text = swap(SIGN, 'name: County Road 17 guide signs, eastbound', `name: ${'['.repeat(2000)}${']'.repeat(2000)}`);
+    const d = firstError(text);
+    expect(d.line).toBe(where(text, 'name: [').line);
+    expect(d.message).toContain('nested too deeply');
+  });
+});
