@@ -4,21 +4,25 @@
 // in the results, the JSON, the terminal summary or the PDF.
 //
 // Each example and the US luminaire twin is parsed with `yaml`, mutated at random (fast-check, a
-// fixed seed so CI sees the same cases every run), written back and run. Most cases go through
+// fixed seed so CI sees the same cases every run), written back and run: mutations of any kind
+// (mostly input errors), and mutations that mostly keep the input valid but odd (the analysis
+// side: steep arms, thin walls, clones, spring bases, analysis settings). Most cases go through
 // the library chain without the PDF (load, analyse, document model, JSON, summary); a few go
 // through the whole CLI. POLEBOOK_FUZZ_SEED and POLEBOOK_FUZZ_RUNS run other and more cases
 // locally; tests/fuzz/hunt.ts reports every distinct failure of a long run at once.
 import fc from 'fast-check';
 import { stringify } from 'yaml';
 import { describe, expect, it } from 'vitest';
-import { mutationsArb } from './mutate.ts';
+import { mutationsArb, oddButValidMutationsArb, type Mutation } from './mutate.ts';
 import { FUZZ_SOURCES, mutatedText } from './sources.ts';
 import { EDGE_DESIGNS } from './edge-designs.ts';
 import { runCliCase, runLibrary, type Outcome } from './run-case.ts';
 
 const SEED = Number(process.env.POLEBOOK_FUZZ_SEED ?? 20261202);
-/** Library cases per source file: 4 sources x 50 = 200 cases in CI. */
-const RUNS = Number(process.env.POLEBOOK_FUZZ_RUNS ?? 50);
+/** Library cases per source file: 4 sources x (35 + 15) = 200 cases in CI. */
+const RUNS = Number(process.env.POLEBOOK_FUZZ_RUNS ?? 35);
+/** Cases per source file of mutations that mostly keep the input valid (the analysis side). */
+const ODD_RUNS = Math.round((RUNS * 15) / 35);
 /** Whole-CLI cases per source file (each writes and reads back a PDF, about 1-2 s). */
 const CLI_RUNS = 1;
 
@@ -30,21 +34,26 @@ function expectKept(o: Outcome, what: string, counts: Counts): void {
   if (o.kind === 'failure') throw new Error(`${what}\n${o.reason}`);
 }
 
+function libraryProperty(arb: fc.Arbitrary<Mutation[]>, runs: number, seed: number, sourceIndex: number, needOk: boolean): void {
+  const source = FUZZ_SOURCES[sourceIndex]!;
+  const counts: Counts = { input: 0, unstable: 0, ok: 0, failure: 0 };
+  fc.assert(
+    fc.property(arb, (mutations) => {
+      const { text, done } = mutatedText(source, mutations);
+      expectKept(runLibrary(text, source.name), `${source.name} mutated: ${done.join(' | ')}`, counts);
+    }),
+    { seed, numRuns: runs },
+  );
+  // The cases reach the analysis, so the property cannot pass by rejecting everything.
+  expect(counts.ok).toBeGreaterThan(0);
+  if (needOk) expect(counts.input).toBeGreaterThan(0);
+}
+
 describe('mutated inputs through the library chain: exit 0, 2 or 3, never an internal error or a NaN', () => {
   FUZZ_SOURCES.forEach((source, i) => {
-    it(`${source.name}: ${RUNS} mutated cases`, () => {
-      const counts: Counts = { input: 0, unstable: 0, ok: 0, failure: 0 };
-      fc.assert(
-        fc.property(mutationsArb, (mutations) => {
-          const { text, done } = mutatedText(source, mutations);
-          expectKept(runLibrary(text, source.name), `${source.name} mutated: ${done.join(' | ')}`, counts);
-        }),
-        { seed: SEED + i, numRuns: RUNS },
-      );
-      // The mutations reach both sides of the promise, so the property cannot pass by rejecting everything.
-      expect(counts.input).toBeGreaterThan(0);
-      expect(counts.ok).toBeGreaterThan(0);
-    });
+    it(`${source.name}: ${RUNS} mutated cases`, () => libraryProperty(mutationsArb, RUNS, SEED + i, i, true));
+    it(`${source.name}: ${ODD_RUNS} odd-but-valid cases (steep arms, thin walls, clones, spring bases, analysis settings)`, () =>
+      libraryProperty(oddButValidMutationsArb, ODD_RUNS, SEED + 50 + i, i, false));
   });
 });
 
