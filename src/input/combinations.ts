@@ -43,6 +43,8 @@ export function userCombinations(list: readonly CombinationInput[], hasIce: bool
   const seen = new Set<string>();
   return list.map((c, i) => {
     if (seen.has(c.id)) problems.push(error(['combinations', i, 'id'], `duplicate combination id '${c.id}'; each combination needs its own id`));
+    // polebook names each wind direction of a combination id@wind-045; a user id with '@' could take such a name.
+    if (c.id.includes('@')) problems.push(error(['combinations', i, 'id'], `'@' is reserved in combination ids: polebook appends @ and the wind direction (${c.id.split('@')[0] || 'c1'}@wind-045); choose an id without '@'`));
     seen.add(c.id);
     const factors: Partial<Record<LoadKind, number>> = {};
     if (c.factors.dead !== undefined) factors.dead = c.factors.dead;

@@ -4,8 +4,10 @@
 import type { Arm, Attachment, WindDirection } from '../design/design.ts';
 
 const TWO_PI = 2 * Math.PI;
-/** Two directions closer than this (rad) are the same analysis. */
-const SAME_DIRECTION_RAD = 1e-6;
+/** Two directions closer than 0.001 deg are the same analysis: the load case ids carry the
+ * direction to 0.001 deg (src/loads/case-ids.ts), so two directions closer than that would share
+ * an id (found by tests/fuzz: 45 and 45.0002 deg stopped the analysis). */
+const SAME_DIRECTION_RAD = (0.001 * Math.PI) / 180;
 
 export function normaliseAngle(a: number): number {
   const r = ((a % TWO_PI) + TWO_PI) % TWO_PI;

@@ -148,3 +148,26 @@ describe('messages for odd values', () => {
     expect(d.message).toContain('nested too deeply');
   });
 });
+
+describe('ids that polebook derives must stay unique', () => {
+  const windCases = (text: string) => loadDesignText(text, 'x.yaml', {}).design.wind.directions.map((d) => (d.angle_rad * 180) / Math.PI);
+
+  it('wind directions closer than 0.001 deg are one direction (45 and 45.0002 deg shared a case id and stopped the analysis)', () => {
+    const merged = windCases(swap(SIGN, 'add: [45 deg]', 'add: [45 deg, 45.0002 deg]'));
+    expect(merged.filter((a) => Math.abs(a - 45) < 0.01)).toHaveLength(1);
+    const apart = windCases(swap(SIGN, 'add: [45 deg]', 'add: [45 deg, 45.002 deg]'));
+    expect(apart.filter((a) => Math.abs(a - 45) < 0.01)).toHaveLength(2);
+  });
+
+  it("a combination id with '@' is refused (it could take the name of another combination's wind direction)", () => {
+    const text = swap(
+      SIGN,
+      'combinations: default       # the labelled default set; or a list with your own factors',
+      'combinations:\n  - { id: c, category: strength, factors: { dead: 1, wind: 1 } }\n  - { id: "c@wind-045", category: strength, factors: { dead: 1 } }',
+    );
+    const d = firstError(text);
+    expect(d.path).toBe('combinations[1].id');
+    expect({ line: d.line, col: d.col }).toEqual(where(text, '"c@wind-045"'));
+    expect(d.message).toContain("'@' is reserved");
+  });
+});
