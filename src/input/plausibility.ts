@@ -50,6 +50,13 @@ export function plausibilityWarnings(input: DesignInput, poleRootDiameter_m: num
     );
   }
   (input.structure.arms ?? []).forEach((a, i) => {
+    // A drooping arm whose tip ends below the base plate would be in the foundation or the ground.
+    const tipHeight_m = a.attachHeight + a.length * Math.sin(a.rise ?? 0);
+    if (tipHeight_m < 0) {
+      out.push(
+        warning(['structure', 'arms', i, a.rise === undefined ? 'attachHeight' : 'rise'], `the tip of arm ${a.id} is ${formatQuantity(-tipHeight_m, 'length', units)} below the pole base (attached at ${formatQuantity(a.attachHeight, 'length', units)}, ${formatQuantity(a.length, 'length', units)} long, rise ${formatNumber(((a.rise ?? 0) * 180) / Math.PI, 3)} deg); check the rise and its sign`),
+      );
+    }
     if (a.length > ARM_LENGTH_USUAL_M * (1 + 1e-9)) {
       out.push(warning(['structure', 'arms', i, 'length'], `arm ${a.id} is ${formatQuantity(a.length, 'length', units)} long, beyond the usual 75 ft (22.9 m) of mast arms (our limit); check the value and its unit`));
     }
