@@ -14,7 +14,7 @@ export const ODD_VALUES: readonly Json[] = [
 ];
 
 /** Angles that are valid numbers but large or at the limit (deg). */
-export const ODD_ANGLES: readonly Json[] = [89, -89, 89.999999, 90, -90, 360, 720, -359.9, 1e6, 1e-12, 45, 180, '89 deg', '1.5707963 rad', 3600];
+export const ODD_ANGLES: readonly Json[] = [89, -89, 89.999999, 90, -90, 360, 720, -359.9, 1e6, 1e-12, 45, 180, '89 deg', '1.5707963 rad', 3600, 45.0002, 0.0004, 359.9996, 90.0005];
 
 export type Mutation =
   | { readonly op: 'delete'; readonly at: number }
@@ -181,7 +181,7 @@ export function applyMutation(root: Json, m: Mutation): string {
       const p = pick(keyPaths(root, ['id', 'on']), m.at);
       if (!p) return 'change-ref: none';
       const ids = keyPaths(root, ['id']).map((q) => get(root, q));
-      const choices: Json[] = [...ids.filter((x): x is Json => x !== undefined), 'pole', 'A9', 'Pole', '', 0];
+      const choices: Json[] = [...ids.filter((x): x is Json => x !== undefined), 'pole', 'A9', 'Pole', '', 0, 'x@wind-000', 'wind-045'];
       const to = pick(choices, m.to)!;
       set(root, p, to);
       return `${p.join('.')} = ${JSON.stringify(to)}`;
@@ -199,7 +199,10 @@ export function applyMutation(root: Json, m: Mutation): string {
       return `${p.join('.')}: multisided, ${m.sides} sides`;
     }
     case 'angle': {
-      const p = pick(keyPaths(root, ['direction', 'rise', 'faceDirection']).filter((q) => typeof get(root, q) !== 'object'), m.at);
+      // Angles also go into the list of added wind directions, where near-duplicates matter.
+      const added = get(root, ['loads', 'wind', 'directions', 'add']);
+      const addPaths: Path[] = Array.isArray(added) ? [...added.keys()].map((k) => ['loads', 'wind', 'directions', 'add', k]) : [];
+      const p = pick([...keyPaths(root, ['direction', 'rise', 'faceDirection']).filter((q) => typeof get(root, q) !== 'object'), ...addPaths], m.at);
       if (!p) return 'angle: none';
       set(root, p, ODD_ANGLES[m.value]!);
       return `${p.join('.')} = ${JSON.stringify(ODD_ANGLES[m.value])}`;
