@@ -35,15 +35,19 @@ export const buildCommand: Command = {
     const result = await buildPackage(input, { env: io.env, firstOrder: args.flags.has('first-order'), json: args.flags.has('json') });
     printWarnings(result.loaded.warnings, io);
     // Everything is computed before anything is written.
-    mkdirSync(outDir, { recursive: true });
     const stem = basename(input, extname(input));
     const pdfPath = join(outDir, `${stem}.pdf`);
-    writeFileAtomic(pdfPath, result.pdf);
-    const written = [pdfPath];
-    if (result.json !== null) {
-      const jsonPath = join(outDir, `${stem}.results.json`);
-      writeFileAtomic(jsonPath, result.json);
-      written.push(jsonPath);
+    const jsonPath = join(outDir, `${stem}.results.json`);
+    const written = [pdfPath, ...(result.json !== null ? [jsonPath] : [])];
+    try {
+      mkdirSync(outDir, { recursive: true });
+      writeFileAtomic(pdfPath, result.pdf);
+      if (result.json !== null) writeFileAtomic(jsonPath, result.json);
+    } catch (err) {
+      // An --out that is a file, or a folder that cannot be written: the command is misused, not polebook.
+      const code = (err as NodeJS.ErrnoException).code;
+      if (typeof code !== 'string') throw err;
+      throw new UsageError(`cannot write the outputs to ${outDir}: ${(err as Error).message}; give --out a folder you can write to`);
     }
     const paint = painter(io);
     for (const line of result.summary) io.stdout(`${line}\n`);
