@@ -56,7 +56,7 @@ export interface InPlaneStatics {
   readonly baseMoment_Nm: number;
   /** Arm bending moment at s from the pole face. */
   armMoment(s_m: number): number;
-  /** Pole bending moment at height z above the base. */
+  /** Pole bending moment at height z above the base (just below z where a moment enters). */
   poleMoment(z_m: number): number;
 }
 
@@ -117,7 +117,8 @@ export function inPlaneStatics(design: Design): InPlaneStatics | null {
     // An offset square to the plane gives a lever of round-off (cos 90°), not a moment.
     if (Math.abs(lever) > ROUND_OFF_LEVER_m) poleSources.push({ what: `${a.kind} ${a.id} on the pole (offset)`, z_m: a.position_m, M_Nm: attachmentWeight_N(a) * lever });
   }
-  const poleMoment = (z: number): number => poleSources.reduce((t, p) => (p.z_m > z ? t + p.M_Nm : t), 0);
+  // At a height where a moment enters, the value just below it (so the joint itself has M_joint).
+  const poleMoment = (z: number): number => poleSources.reduce((t, p) => (p.z_m >= z ? t + p.M_Nm : t), 0);
 
   return {
     arm,
