@@ -50,8 +50,12 @@ function loadFromText(original: string, file: string, hash: string, env: LoadEnv
 
   const jsonProblem = file.toLowerCase().endsWith('.json') ? strictJsonDiagnostic(text, lines, file) : undefined;
   if (jsonProblem) throw new InputError([jsonProblem]);
-  if (doc.errors.length > 0) {
-    throw new InputError(uniquePlaces(sortByPlace(doc.errors.map((e) => yamlErrorDiagnostic(e, text, lines, file)))));
+  // An unknown tag (height: !m 26) is only a warning to yaml, which then reads the plain value:
+  // 26 in the file's own unit, silently. Refuse it.
+  const tagProblems = doc.warnings.filter((w) => w.code === 'TAG_RESOLVE_FAILED');
+  const yamlProblems = [...doc.errors, ...tagProblems];
+  if (yamlProblems.length > 0) {
+    throw new InputError(uniquePlaces(sortByPlace(yamlProblems.map((e) => yamlErrorDiagnostic(e, text, lines, file)))));
   }
   const data: unknown = toData(doc, text, lines, file);
   if (data === null || data === undefined) {
@@ -159,6 +163,7 @@ function uniquePlaces(ds: Diagnostic[]): Diagnostic[] {
 const YAML_HINTS: Readonly<Record<string, string>> = {
   DUPLICATE_KEY: '; each key may appear once in a block (remove or rename one)',
   TAB_AS_INDENT: '; indent with spaces, not tabs',
+  TAG_RESOLVE_FAILED: '; polebook reads no YAML tags: write a unit inside the value instead, e.g. "26 m"',
   BAD_INDENT: '; check that keys of one block line up',
   BLOCK_AS_IMPLICIT_KEY: '; this line is indented deeper than its block (check its indentation)',
   MULTILINE_IMPLICIT_KEY: '; this line is indented deeper than its block, or a comma is missing before it',

@@ -185,3 +185,12 @@ describe('plausibility of arm geometry', () => {
     expect(loadDesignText(swap(SIGN, 'rise: 0 deg           # horizontal arm', 'rise: -40 deg'), 'x.yaml', {}).warnings).toEqual([]); // 24 - 36 sin 40 = 0.86 ft
   });
 });
+
+describe('YAML tags', () => {
+  it('a unit written as a tag (height: !m 26) is refused; it was read silently as 26 ft', () => {
+    const text = swap(SIGN, 'height: 26              # ft', 'height: !m 26           # ft');
+    const d = firstError(text);
+    expect({ line: d.line, col: d.col }).toEqual(where(text, '!m'));
+    expect(d.message).toContain('polebook reads no YAML tags');
+  });
+});
