@@ -4,15 +4,16 @@
 //
 // With the pole base at z = 0, the joint (the main arm's attach height) at h, the arm's
 // horizontal reach R from the pole axis to the tip, the arm length L and rise α:
-//   first theorem:  θ_joint = θ_base + ∫₀ʰ M/EI dz              (θ_base = M_base / k for a base spring)
-//   second theorem: Δ_joint = θ_base h + ∫₀ʰ M (h − z)/EI dz
-//   arm tip:        δ_tip  = θ_joint R + cos α ∫₀ᴸ M (L − s)/EI ds
+//   first theorem:  θ_joint = θ_base + ∫[0,h] M/EI dz              (θ_base = M_base / k for a base spring)
+//   second theorem: Δ_joint = θ_base h + ∫[0,h] M (h − z)/EI dz
+//   arm tip:        δ_tip  = θ_joint R + cos α ∫[0,L] M (L − s)/EI ds
 // (the tip moves square to the arm by (L − s) dθ for a curvature at s; its vertical part is
 // (L − s) cos α dθ). Signs: M > 0 as the main arm's weights act; θ > 0 drops the tip; Δ > 0
 // toward the arm; δ_tip > 0 downward. Axial shortening and shear deformation are neglected.
 import { qty, StepCollector, type CalcStep, type Expr } from '../calc/step.ts';
 import type { Design } from '../design/design.ts';
 import { sectionAt } from '../model/taper.ts';
+import { formatNumber } from '../units/units.ts';
 import { integratePiecewise, type QuadratureSettings } from './gauss-legendre.ts';
 import { inPlaneStatics, type InPlaneStatics } from './in-plane-statics.ts';
 
@@ -117,7 +118,7 @@ export function momentAreaCheck(design: Design, quadrature: QuadratureSettings =
   c.add({
     description: `In-plane moment in arm ${arm.id} at its root (pole face): attachment weights × horizontal lever arms, plus the tapered self-weight`,
     symbol: 'M_root',
-    formula: 'M_root = Σ W_i s_i cos α + cos α ∫₀ᴸ w(s) s ds',
+    formula: 'M_root = Σ W_i s_i cos α + cos α ∫[0,L] w(s) s ds',
     substituted: [...weightTerms, st.armWeights.length > 0 ? ' + ' : '', qty(selfPart, 'moment'), ` (cos α = ${cosRise.toFixed(4)})`],
     result: qty(st.armRootMoment_Nm, 'moment'),
     source: 'statics of the cantilevered arm; w(s) = ρ g A(s), A linear in s for a constant wall',
@@ -147,24 +148,24 @@ export function momentAreaCheck(design: Design, quadrature: QuadratureSettings =
   c.add({
     description: `Joint rotation at the arm ${arm.id} connection (first moment-area theorem; positive drops the arm tip)`,
     symbol: 'θ_joint',
-    formula: Number.isFinite(k) ? 'θ_joint = θ_base + ∫₀ʰ M/EI dz' : 'θ_joint = ∫₀ʰ M/EI dz',
-    substituted: [...base, '∫₀ʰ M/EI dz = ', qty(poleRot, 'angle'), ' (h = ', qty(h, 'length'), ')'],
+    formula: Number.isFinite(k) ? 'θ_joint = θ_base + ∫[0,h] M/EI dz' : 'θ_joint = ∫[0,h] M/EI dz',
+    substituted: [...base, '∫[0,h] M/EI dz = ', qty(poleRot, 'angle'), ' (h = ', qty(h, 'length'), ')'],
     result: qty(jointRotation, 'angle'),
     source: src,
   });
   c.add({
     description: 'Joint sway, horizontal in the plane of the arm (second moment-area theorem; positive toward the arm)',
     symbol: 'Δ_joint',
-    formula: Number.isFinite(k) ? 'Δ_joint = θ_base h + ∫₀ʰ M (h − z)/EI dz' : 'Δ_joint = ∫₀ʰ M (h − z)/EI dz',
-    substituted: [...(Number.isFinite(k) ? [qty(baseRot, 'angle'), ' × ', qty(h, 'length'), ' + '] : []), '∫₀ʰ M (h − z)/EI dz = ', qty(poleSway, 'section')],
+    formula: Number.isFinite(k) ? 'Δ_joint = θ_base h + ∫[0,h] M (h − z)/EI dz' : 'Δ_joint = ∫[0,h] M (h − z)/EI dz',
+    substituted: [...(Number.isFinite(k) ? [qty(baseRot, 'angle'), ' × ', qty(h, 'length'), ' + '] : []), '∫[0,h] M (h − z)/EI dz = ', qty(poleSway, 'section')],
     result: qty(jointSway, 'section'),
     source: src,
   });
   c.add({
     description: `Tip drop of arm ${arm.id} from its own bending (second theorem along the arm; vertical part of the deflection square to the arm)`,
     symbol: 'δ_arm',
-    formula: 'δ_arm = cos α ∫₀ᴸ M (L − s)/EI ds',
-    substituted: [`${cosRise.toFixed(4)} × ∫₀ᴸ M (L − s)/EI ds = ${cosRise.toFixed(4)} × `, qty(armDrop / cosRise, 'section'), ' (L = ', qty(L, 'length'), ')'],
+    formula: 'δ_arm = cos α ∫[0,L] M (L − s)/EI ds',
+    substituted: [`${cosRise.toFixed(4)} × ∫[0,L] M (L − s)/EI ds = ${cosRise.toFixed(4)} × `, qty(armDrop / cosRise, 'section'), ' (L = ', qty(L, 'length'), ')'],
     result: qty(armDrop, 'section'),
     source: src,
   });
@@ -172,7 +173,8 @@ export function momentAreaCheck(design: Design, quadrature: QuadratureSettings =
     description: `Vertical deflection of the tip of arm ${arm.id} (positive down): the joint rotation over the horizontal reach from the pole axis, plus the arm's own bending`,
     symbol: 'δ_tip',
     formula: 'δ_tip = θ_joint R + δ_arm',
-    substituted: [qty(jointRotation, 'angle'), ' × ', qty(st.reach_m, 'length'), ' + ', qty(armDrop, 'section')],
+    // The rotation in radians, as it enters the product (the angle dimension prints degrees).
+    substituted: [`${formatNumber(jointRotation)} rad × `, qty(st.reach_m, 'length'), ' + ', qty(armDrop, 'section')],
     result: qty(tipDrop, 'section'),
     source: src,
   });

@@ -6,6 +6,7 @@ import type { DocSection } from '../document.ts';
 import { combinationsSection } from './combinations-section.ts';
 import { diagramsSection } from './diagrams-section.ts';
 import { elevationPlanSection } from './elevation-plan-section.ts';
+import { handCheckSection } from './hand-check-section.ts';
 import { loadCasesSection } from './load-cases-section.ts';
 import { resultsSection } from './results-section.ts';
 import { structuralModelSection } from './structural-model-section.ts';
@@ -17,6 +18,7 @@ export function analysisSections(loaded: LoadedDesign, analysis: DesignAnalysis)
     loadCasesSection(loaded, analysis),
     combinationsSection(loaded, analysis),
     resultsSection(loaded, analysis),
+    handCheckSection(loaded, analysis),
     diagramsSection(loaded, analysis),
   ];
 }

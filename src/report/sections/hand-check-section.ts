@@ -1,0 +1,111 @@
+// Section "Hand check by the moment-area method": the in-plane dead-load case of the longest arm
+// and the pole by Mohr's theorems along the real taper (src/handcheck/), the steps a checker
+// would write, the integration tables to follow by hand, and the comparison with the matrix
+// analysis of the 'dead' case alone.
+import type { DesignAnalysis } from '../../analyse-design.ts';
+import type { LoadedDesign } from '../../design/design.ts';
+import { compareWithMatrix, EXPECTED_AGREEMENT, type ComparisonRow } from '../../handcheck/matrix-comparison.ts';
+import { momentAreaCheck, TABLE_INTERVALS, type IntegrationTable, type MomentAreaCheck } from '../../handcheck/moment-area.ts';
+import { displayUnit, formatNumber, fromSI, prettyUnit, type UnitSystem } from '../../units/units.ts';
+import type { Block, DocSection } from '../document.ts';
+import { display, type Display } from './display.ts';
+import { templateBlocks } from './templates.ts';
+
+export const HAND_CHECK_TITLE = 'Hand check by the moment-area method';
+
+/** A per-length quantity (curvature M/EI) in the user's length unit. */
+function perLength(v_per_m: number, units: UnitSystem): string {
+  const unit = displayUnit(units, 'length');
+  return `${formatNumber(v_per_m / fromSI(1, unit, 'length'))} rad/${prettyUnit(unit)}`;
+}
+
+function tableBlock(t: IntegrationTable, check: MomentAreaCheck, d: Display): Block {
+  const pole = t.member === 'pole';
+  const x = pole ? 'z' : 's';
+  const lever = pole ? '(h − z)' : '(L − s) cos α';
+  const curvatureQuad = pole ? check.poleRotationIntegral_rad : null;
+  const leveredQuad = pole ? check.poleSwayIntegral_m : check.armDrop_m;
+  const name = pole ? `the pole from the base to the joint (h = ${d.q(t.length_m, 'length')})` : `arm ${check.statics.arm.id} from the pole face to the tip (L = ${d.q(t.length_m, 'length')})`;
+  return {
+    kind: 'table',
+    title: `Integration table: ${name}, ${TABLE_INTERVALS} intervals`,
+    header: [x, 'M', 'I', 'M/EI', `M ${lever}/EI`],
+    widths: [62, '*', '*', '*', '*'],
+    rows: t.rows.map((r) => [d.q(r.position_m, 'length'), d.q(r.M_Nm, 'moment'), d.q(r.I_m4, 'inertia'), perLength(r.curvature_per_m, d.units), `${formatNumber(r.leveredCurvature)} rad`]),
+    note:
+      `E = ${d.q(check.E_Pa, 'stress')}. ${pole ? 'M at the joint height is the value just below the joint. ' : ''}` +
+      `Simpson's rule on these ${TABLE_INTERVALS + 1} points gives ∫ M/EI d${x} = ${d.angle(t.simpsonCurvature)}` +
+      (curvatureQuad !== null ? ` (quadrature: ${d.angle(curvatureQuad)})` : '') +
+      ` and ∫ M ${lever}/EI d${x} = ${d.q(t.simpsonLevered, 'section')} (quadrature: ${d.q(leveredQuad, 'section')}). ` +
+      'The table is coarse and M has kinks between its points, so Simpson agrees within a few per cent, not exactly; the package uses the quadrature.',
+  };
+}
+
+function differenceText(r: ComparisonRow): string {
+  if (r.relativeDifference === null) return `nil in both (${r.differenceOfScale.toExponential(1)} of the tip drop)`;
+  return `${formatNumber(100 * r.relativeDifference, 3)} %`;
+}
+
+function otherSourcesText(check: MomentAreaCheck, d: Display): string {
+  const others = check.statics.poleSources.slice(1);
+  if (others.length === 0) return 'The design has no other arm and no offset weight on the pole: the pole below the joint carries the joint moment alone.';
+  const list = others.map((o) => `${o.what} at ${d.q(o.z_m, 'length')}: ${d.q(o.M_Nm, 'moment')}`).join('; ');
+  return `Other arms and offset weights on the pole add their in-plane moments (weight × horizontal lever arm projected on the plane) to the pole below them: ${list}. Their out-of-plane parts are left out.`;
+}
+
+export function handCheckSection(loaded: LoadedDesign, analysis: DesignAnalysis): DocSection {
+  const { design } = loaded;
+  const d = display(design.units);
+  const check = momentAreaCheck(design);
+  if (!check) {
+    return { id: 'hand-check', title: HAND_CHECK_TITLE, blocks: [{ kind: 'paragraph', text: 'The design has no arm, so there is no in-plane arm case to check by hand.' }] };
+  }
+  const cmp = compareWithMatrix(check, analysis.model, analysis.cases);
+  const arm = check.statics.arm;
+  const blocks: Block[] = [
+    ...templateBlocks('hand-check', {
+      armId: arm.id,
+      planeDirection: d.angle(arm.direction_rad),
+      segments: String(design.analysis.segmentsPerMember),
+      otherSources: otherSourcesText(check, d),
+      rise: d.angle(arm.rise_rad),
+      points: String(check.quadrature.points),
+      panels: String(2 * check.quadrature.panels),
+      integrationError: check.integrationError === 0 ? '0 (exact)' : check.integrationError.toExponential(1),
+    }).blocks,
+    { kind: 'heading', level: 2, text: 'Moments and displacements by hand' },
+    ...check.steps.map((step): Block => ({ kind: 'step', step })),
+    { kind: 'heading', level: 2, text: 'Comparison with the matrix analysis' },
+    {
+      kind: 'paragraph',
+      text:
+        `The matrix values are polebook's first-order analysis of the load case 'dead' alone on the frame model of this package (${design.analysis.segmentsPerMember} prismatic segments per member): ` +
+        `the rotation of the pole node at the joint about the axis normal to the arm's plane, its horizontal displacement along the arm's plan direction, and the downward displacement of the arm tip. ` +
+        `Expected agreement: within ${formatNumber(100 * EXPECTED_AGREEMENT)} % at 20 segments per member; the segment chain's prismatic approximation of the taper is the main source of the difference, with the axial shortening and the torsion coupling that the hand method leaves out.`,
+    },
+    {
+      kind: 'table',
+      title: `Hand check against the matrix analysis, load case 'dead', arm ${arm.id}`,
+      header: ['Quantity', 'Moment-area', 'Matrix', 'Difference'],
+      widths: ['*', 90, 90, 110],
+      rows: cmp.rows.map((r) => [r.label, d.q(r.momentArea, r.dim), d.q(r.matrix, r.dim), differenceText(r)]),
+      note: "Difference = (matrix − moment-area) / moment-area. A quantity nil by symmetry is compared with the tip drop (for the rotation, the tip drop over the reach). Signs: rotation positive when it drops the arm tip, sway positive toward the arm, tip drop positive down.",
+    },
+    { kind: 'heading', level: 2, text: 'Integration tables' },
+    {
+      kind: 'paragraph',
+      text: `The M/EI diagrams of the pole and the arm at ${TABLE_INTERVALS} equal intervals, with I from the tube formulas at each point, so the integrals above can be followed by hand.`,
+    },
+    tableBlock(check.poleTable, check, d),
+    tableBlock(check.armTable, check, d),
+  ];
+  const worst = Math.max(...cmp.rows.map((r) => Math.abs(r.relativeDifference ?? r.differenceOfScale)));
+  if (worst > EXPECTED_AGREEMENT) {
+    blocks.push({
+      kind: 'caution',
+      title: 'Hand check differs from the analysis',
+      text: `The moment-area values and the matrix analysis differ by up to ${formatNumber(100 * worst, 3)} %, more than the ${formatNumber(100 * EXPECTED_AGREEMENT)} % expected. With fewer than 20 segments per member the segment chain may be too coarse; otherwise the engineer should find the cause before relying on the results.`,
+    });
+  }
+  return { id: 'hand-check', title: HAND_CHECK_TITLE, blocks };
+}
