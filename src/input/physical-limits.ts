@@ -27,3 +27,10 @@ export const PHYSICAL_LIMIT_SI: Readonly<Record<Dim, number>> = {
   mass: 1e6, // kg
   ratio: 1e6,
 };
+
+/** The smallest magnitude, for the few kinds where a tiny positive value is as impossible as a
+ * huge one: a tube lighter than water is no metal (and a weightless tube beside a heavy
+ * attachment leaves the natural modes without a solution). polebook limits. */
+export const PHYSICAL_FLOOR_SI: Readonly<Partial<Record<Dim, number>>> = {
+  density: 1000, // kg/m3: water; steel is about 7850, aluminium about 2700
+};

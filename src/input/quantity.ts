@@ -2,7 +2,7 @@
 // default unit, or a string with its unit ("28 ft", "3.5 psf"). The output is SI.
 import { z } from 'zod';
 import { SYSTEM_UNIT, UNITS, formatQuantity, parseQuantity, unitSymbols, type Dim, type UnitSystem } from '../units/units.ts';
-import { PHYSICAL_LIMIT_SI } from './physical-limits.ts';
+import { PHYSICAL_FLOOR_SI, PHYSICAL_LIMIT_SI } from './physical-limits.ts';
 
 export const DIM_NAMES: Readonly<Record<Dim, string>> = {
   length: 'length',
@@ -99,6 +99,11 @@ export function quantity(dim: Dim, system: UnitSystem, bound: Bound, text: strin
       if (Math.abs(si) > PHYSICAL_LIMIT_SI[dim]) {
         const limit = formatQuantity(PHYSICAL_LIMIT_SI[dim], dim, system);
         ctx.addIssue({ code: 'custom', message: `${String(raw)} is beyond any pole-and-arm support (at most ${limit} in magnitude, a limit of ours); check the value and its unit` });
+        return z.NEVER;
+      }
+      const floor = PHYSICAL_FLOOR_SI[dim];
+      if (floor !== undefined && si !== 0 && Math.abs(si) < floor) {
+        ctx.addIssue({ code: 'custom', message: `${String(raw)} is below any tube material (at least ${formatQuantity(floor, dim, system)}, a limit of ours); check the value and its unit` });
         return z.NEVER;
       }
       return si;

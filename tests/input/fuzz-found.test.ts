@@ -194,3 +194,18 @@ describe('YAML tags', () => {
     expect(d.message).toContain('polebook reads no YAML tags');
   });
 });
+
+describe('density', () => {
+  it('a tube lighter than water is refused at its key (1 g/m3 left the natural modes without a solution)', () => {
+    const text = swap(SIGN, '    # density: 490 pcf      # default', '    density: 1e-6 pcf');
+    const d = firstError(text);
+    expect(d.path).toBe('structure.material.density');
+    expect({ line: d.line, col: d.col }).toEqual(where(text, '1e-6 pcf'));
+    expect(d.message).toContain('62.43 pcf'); // 1000 kg/m3 / 16.01846 kg/m3 per pcf (NIST SP 811)
+  });
+
+  it('a pcf number typed into an SI file (490 read as kg/m3) is caught by the same floor', () => {
+    const d = firstError(swap(TWIN, '  pole:\n    height: 10', '  material: { density: 490 }\n  pole:\n    height: 10'));
+    expect(d.path).toBe('structure.material.density');
+  });
+});
