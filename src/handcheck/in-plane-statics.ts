@@ -118,7 +118,18 @@ export function inPlaneStatics(design: Design): InPlaneStatics | null {
     if (Math.abs(lever) > ROUND_OFF_LEVER_m) poleSources.push({ what: `${a.kind} ${a.id} on the pole (offset)`, z_m: a.position_m, M_Nm: attachmentWeight_N(a) * lever });
   }
   // At a height where a moment enters, the value just below it (so the joint itself has M_joint).
-  const poleMoment = (z: number): number => poleSources.reduce((t, p) => (p.z_m >= z ? t + p.M_Nm : t), 0);
+  // Moments that cancel (twin arms) leave round-off, not a moment: below 1e-12 of the sum of
+  // their sizes the pole moment is zero.
+  const poleMoment = (z: number): number => {
+    let sum = 0;
+    let size = 0;
+    for (const p of poleSources) {
+      if (p.z_m < z) continue;
+      sum += p.M_Nm;
+      size += Math.abs(p.M_Nm);
+    }
+    return Math.abs(sum) <= 1e-12 * size ? 0 : sum;
+  };
 
   return {
     arm,
