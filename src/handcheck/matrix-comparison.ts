@@ -18,7 +18,7 @@ export const EXPECTED_AGREEMENT = 0.01;
  * shown against the scale instead of as a percentage of itself. */
 export const NIL_SHARE = 1e-6;
 
-export type QuantityKey = 'jointRotation' | 'jointSway' | 'tipDrop';
+export type QuantityKey = 'jointRotation' | 'jointSway' | 'tipDrop' | 'tipDropWithShortening';
 
 export interface ComparisonRow {
   readonly key: QuantityKey;
@@ -58,6 +58,7 @@ export function compareWithMatrix(check: MomentAreaCheck, model: FrameModel, cas
     jointRotation: dot([uj[3], uj[4], uj[5]], n),
     jointSway: dot([uj[0], uj[1], uj[2]], e),
     tipDrop: -u[tipNode][2],
+    tipDropWithShortening: -u[tipNode][2],
   };
   const tipScale = Math.abs(check.tipDrop_m);
   const rows = (
@@ -65,6 +66,7 @@ export function compareWithMatrix(check: MomentAreaCheck, model: FrameModel, cas
       ['jointRotation', 'Joint rotation θ_joint', 'angle', check.jointRotation_rad, tipScale / check.statics.reach_m],
       ['jointSway', 'Joint sway Δ_joint', 'section', check.jointSway_m, tipScale],
       ['tipDrop', `Arm ${armId} tip drop δ_tip`, 'section', check.tipDrop_m, tipScale],
+      ['tipDropWithShortening', `For reference: δ_tip + δ_axial (pole shortening)`, 'section', check.tipDrop_m + check.poleShortening_m, tipScale],
     ] as const
   ).map(([key, label, dim, ma, fallbackScale]): ComparisonRow => {
     const nil = Math.abs(ma) <= NIL_SHARE * fallbackScale;

@@ -16,6 +16,7 @@ import { sectionAt } from '../model/taper.ts';
 import { formatNumber } from '../units/units.ts';
 import { integratePiecewise, type QuadratureSettings } from './gauss-legendre.ts';
 import { inPlaneStatics, type InPlaneStatics } from './in-plane-statics.ts';
+import { poleShortening_m } from './pole-shortening.ts';
 
 export const MOMENT_AREA_SOURCE = "moment-area method (Mohr's theorems), e.g. Hibbeler, Structural Analysis";
 
@@ -57,6 +58,9 @@ export interface MomentAreaCheck {
   readonly jointRotation_rad: number;
   readonly jointSway_m: number;
   readonly tipDrop_m: number;
+  /** Axial shortening of the pole to the joint, ∫ N/EA dz: left out of the moment-area result,
+   * printed for reading the comparison. */
+  readonly poleShortening_m: number;
   readonly quadrature: QuadratureSettings;
   /** Largest |I(panels) − I(2 panels)| / |I(2 panels)| of the three integrals (the values are the finer ones). */
   readonly integrationError: number;
@@ -179,6 +183,16 @@ export function momentAreaCheck(design: Design, quadrature: QuadratureSettings =
     source: src,
   });
 
+  const shortening = poleShortening_m(design, h, { points: quadrature.points, panels: 2 * quadrature.panels });
+  c.add({
+    description: 'For reading the comparison only, not part of the moment-area result: axial shortening of the pole from the base to the joint under the whole dead load (it lowers the joint and the arm tip with it)',
+    symbol: 'δ_axial',
+    formula: 'δ_axial = ∫[0,h] N/EA dz',
+    substituted: ['∫[0,h] N/EA dz, N = weight above z, = ', qty(shortening, 'section')],
+    result: qty(shortening, 'section'),
+    source: 'axial deformation of a bar, δ = ∫ N/EA dz',
+  });
+
   return {
     statics: st,
     E_Pa: E,
@@ -190,6 +204,7 @@ export function momentAreaCheck(design: Design, quadrature: QuadratureSettings =
     jointRotation_rad: jointRotation,
     jointSway_m: jointSway,
     tipDrop_m: tipDrop,
+    poleShortening_m: shortening,
     quadrature,
     integrationError: worst,
     poleTable: table('pole', h, st.poleMoment, Ipole, E, (z) => h - z),

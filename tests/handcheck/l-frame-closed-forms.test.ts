@@ -52,6 +52,10 @@ describe('L-frame with a tip weight, uniform tubes, fixed base', () => {
   it('joint rotation P a h / EI', () => expect(rel(c.jointRotation_rad, (P * a * h) / EIp)).toBeLessThan(TOL));
   it('joint sway P a h² / (2 EI)', () => expect(rel(c.jointSway_m, (P * a * h * h) / (2 * EIp))).toBeLessThan(TOL));
   it('tip drop P L³/(3 EI_arm) + P a² h / EI_pole', () => expect(rel(c.tipDrop_m, (P * L ** 3) / (3 * EIa) + (P * a * a * h) / EIp)).toBeLessThan(TOL));
+  it('pole shortening (printed for reference) P h / (E A), A = π/4 (D² − d²) (axial deformation of a bar, any mechanics of materials text)', () => {
+    const A = (Math.PI / 4) * (Dp ** 2 - (Dp - 2 * tp) ** 2);
+    expect(rel(c.poleShortening_m, (P * h) / (E * A))).toBeLessThan(TOL);
+  });
 });
 
 describe('L-frame with a tip weight, rotational base spring', () => {

@@ -5,6 +5,7 @@
 // analysis of the same dead load, to 1e-9 relative.
 import { describe, expect, it } from 'vitest';
 import { solveLoads } from '../../src/analysis/analyze.ts';
+import { compareWithMatrix, EXPECTED_AGREEMENT } from '../../src/handcheck/matrix-comparison.ts';
 import { momentAreaCheck } from '../../src/handcheck/moment-area.ts';
 import { buildLoadCases } from '../../src/loads/index.ts';
 import { buildFrame } from '../../src/model/build-frame.ts';
@@ -34,5 +35,27 @@ describe('other arms and pole attachments at other plan angles', () => {
     const c1 = c.statics.poleSources.find((p) => p.what.includes('C1'));
     expect(c1?.M_Nm).toBeCloseTo(600 * 0.35 * Math.cos(deg(200)), 9);
     expect(c.statics.poleMoment(0) - c.statics.poleMoment(4)).toBeCloseTo(600 * 0.35 * Math.cos(deg(200)), 6);
+  });
+});
+
+describe('a tapered design with a base spring and a second arm at 120 deg, 20 segments', () => {
+  // Against the matrix analysis of the dead case: agreement within EXPECTED_AGREEMENT (1 %), the
+  // tolerance stated for 20 segments (segment-convergence study, tests/model/segment-convergence.test.ts).
+  it('joint rotation, sway and tip drop agree within 1 %', () => {
+    const base = makeDesign({
+      arms: [testArm(), testArm({ id: 'A2', length_m: 4, attachHeight_m: 5.5, direction_rad: deg(120), rise_rad: deg(6), section: roundSection(0.2, 0.12, 0.004) })],
+      attachments: [testPanel(), testHead(), testHead({ id: 'H2', member: 'A2', position_m: 3.5, weight_N: 400 })],
+      pole: { ...makeDesign().pole, base: { kind: 'spring', stiffness_Nm_per_rad: 3e7 } },
+    });
+    const d = { ...base, analysis: { ...base.analysis, segmentsPerMember: 20 } };
+    const c = momentAreaCheck(d);
+    if (!c) throw new Error('no arm');
+    expect(c.baseRotation_rad).toBeGreaterThan(0);
+    const model = buildFrame(d);
+    const rows = compareWithMatrix(c, model, buildLoadCases(d, model)).rows;
+    for (const r of rows) {
+      expect(r.relativeDifference, r.label).not.toBeNull();
+      expect(Math.abs(r.relativeDifference ?? 1), r.label).toBeLessThan(EXPECTED_AGREEMENT);
+    }
   });
 });
