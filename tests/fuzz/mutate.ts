@@ -31,7 +31,8 @@ export type Mutation =
   | { readonly op: 'empty'; readonly at: number; readonly list: boolean }
   | { readonly op: 'clone'; readonly at: number }
   | { readonly op: 'spring-base'; readonly stiffness: number }
-  | { readonly op: 'analysis'; readonly key: string; readonly value: Json };
+  | { readonly op: 'analysis'; readonly key: string; readonly value: Json }
+  | { readonly op: 'material'; readonly key: string; readonly value: Json };
 
 const idx = fc.nat({ max: 10_000 });
 export const mutationArb: fc.Arbitrary<Mutation> = fc.oneof(
@@ -49,6 +50,12 @@ export const mutationArb: fc.Arbitrary<Mutation> = fc.oneof(
   fc.record({ op: fc.constant('empty' as const), at: idx, list: fc.boolean() }),
 );
 
+const materialArb = fc.record({
+  op: fc.constant('material' as const),
+  key: fc.constantFrom('E', 'G', 'density', 'poissonRatio', 'yieldStrength'),
+  value: fc.constantFrom<Json>(0.3, 0.5, '1 ksi', '1e-6 ksi', '200000 MPa', '62.5 pcf', '1000 kg/m3', '20000 kg/m3', 490, 7850, 1e-9),
+});
+
 /** Mutations that mostly keep the input valid but odd: the analysis side of the promise. */
 export const oddButValidArb: fc.Arbitrary<Mutation> = fc.oneof(
   fc.record({ op: fc.constant('scale' as const), at: idx, factor: fc.constantFrom(0.5, 2, 10, 0.1, 3, 0.01) }),
@@ -64,6 +71,7 @@ export const oddButValidArb: fc.Arbitrary<Mutation> = fc.oneof(
     key: fc.constantFrom('segmentsPerMember', 'pDeltaMaxIterations', 'pDeltaTolerance', 'secondOrder', 'stationSpacing'),
     value: fc.constantFrom<Json>(1, 2, 200, 1e-12, 0.01, false, '0.01 ft', '100 ft'),
   }),
+  materialArb,
 );
 
 /** One to three mutations per case. */
@@ -251,6 +259,13 @@ export function applyMutation(root: Json, m: Mutation): string {
       const a = isMap(root.analysis) ? root.analysis : (root.analysis = {});
       a[m.key] = structuredClone(m.value);
       return `analysis.${m.key} = ${JSON.stringify(m.value)}`;
+    }
+    case 'material': {
+      const st = get(root, ['structure']);
+      if (!isMap(st)) return 'material: no structure';
+      const mat = isMap(st.material) ? st.material : (st.material = {});
+      mat[m.key] = structuredClone(m.value);
+      return `structure.material.${m.key} = ${JSON.stringify(m.value)}`;
     }
     case 'empty': {
       const containers = allPaths(root).filter((p) => typeof get(root, p) === 'object' && get(root, p) !== null);
