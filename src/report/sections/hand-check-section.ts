@@ -8,6 +8,7 @@ import { compareWithMatrix, EXPECTED_AGREEMENT, type ComparisonRow } from '../..
 import { momentAreaCheck, TABLE_INTERVALS, type IntegrationTable, type MomentAreaCheck } from '../../handcheck/moment-area.ts';
 import { displayUnit, formatNumber, fromSI, prettyUnit, type UnitSystem } from '../../units/units.ts';
 import type { Block, DocSection } from '../document.ts';
+import { arrow, INK, line, polyline, svgDocument, text, type Pt } from '../figures/svg.ts';
 import { display, type Display } from './display.ts';
 import { templateBlocks } from './templates.ts';
 
@@ -39,6 +40,53 @@ function tableBlock(t: IntegrationTable, check: MomentAreaCheck, d: Display): Bl
       ` and ∫ M ${lever}/EI d${x} = ${d.q(t.simpsonLevered, 'section')} (quadrature: ${d.q(leveredQuad, 'section')}). ` +
       'The table is coarse and M has kinks between its points, so Simpson agrees within a few per cent, not exactly; the package uses the quadrature.',
   };
+}
+
+/** A dimension line with a head at each end. */
+function dimension(a: Pt, c: Pt): string[] {
+  const m: Pt = [(a[0] + c[0]) / 2, (a[1] + c[1]) / 2];
+  return [arrow(m[0], m[1], a[0], a[1], { width: 0.6, head: 4 }), arrow(m[0], m[1], c[0], c[1], { width: 0.6, head: 4 })];
+}
+
+/** Sketch of the quantities, not to scale: the pole and the arm, the deflected shape (dashed,
+ * exaggerated) and the positive senses of θ_joint, Δ_joint and δ_tip. */
+function quantitiesSketch(armId: string): { svg: string; width: number; height: number } {
+  const width = 330;
+  const height = 175;
+  const b: Pt = [84, 150];
+  const h = 105; // joint height on the page
+  const top = 125;
+  const R = 200;
+  const sway = 12;
+  const drop = 34;
+  const body: string[] = [];
+  for (let k = -18; k <= 18; k += 6) body.push(line(b[0] + k, b[1], b[0] + k - 5, b[1] + 6, { width: 0.5 }));
+  body.push(line(b[0] - 20, b[1], b[0] + 20, b[1], { width: 1 }));
+  body.push(line(b[0], b[1], b[0], b[1] - top, { width: 2.2 }));
+  body.push(line(b[0], b[1] - h, b[0] + R, b[1] - h, { width: 1.8 }));
+  // Deflected shape: uniform pole moment → a parabola; the arm turns by θ and bends on its own.
+  const pole: Pt[] = [];
+  for (let i = 0; i <= 10; i++) pole.push([b[0] + sway * (i / 10) ** 2, b[1] - (h * i) / 10]);
+  const slope = (2 * sway) / h;
+  const arm: Pt[] = [];
+  for (let i = 0; i <= 10; i++) {
+    const u = i / 10;
+    arm.push([b[0] + sway + R * u, b[1] - h + slope * R * u + (drop - slope * R) * u * u * (3 - u) / 2]);
+  }
+  body.push(polyline(pole, { color: INK.accent, width: 1, dash: '3 2' }), polyline(arm, { color: INK.accent, width: 1, dash: '3 2' }));
+  // Weights on the arm.
+  for (const u of [0.45, 0.85]) body.push(arrow(b[0] + R * u, b[1] - h - 26, b[0] + R * u, b[1] - h - 3, { width: 0.9, head: 4 }));
+  body.push(text(b[0] + R * 0.45 + 4, b[1] - h - 18, 'W', { size: 8, italic: true }));
+  // Dimensions h and R.
+  body.push(...dimension([b[0] - 50, b[1]], [b[0] - 50, b[1] - h]), text(b[0] - 54, b[1] - h / 2, 'h', { size: 8, italic: true, anchor: 'end' }));
+  body.push(...dimension([b[0], b[1] - h - 36], [b[0] + R, b[1] - h - 36]), text(b[0] + R / 2, b[1] - h - 40, 'R (pole axis to tip)', { size: 7.5, anchor: 'middle' }));
+  // Positive senses.
+  body.push(arrow(b[0] + 2, b[1] - h + 12, b[0] + sway + 2, b[1] - h + 12, { color: INK.accent, width: 0.9, head: 4 }), text(b[0] - 4, b[1] - h + 15, 'Δ_joint', { size: 7.5, color: INK.accent, anchor: 'end' }));
+  body.push(text(b[0] + sway + 34, b[1] - h + 20 + slope * 34, 'θ_joint', { size: 7.5, color: INK.accent }));
+  body.push(arrow(b[0] + R + 10, b[1] - h, b[0] + R + 10, b[1] - h + drop + sway * 0, { color: INK.accent, width: 0.9, head: 4 }), text(b[0] + R + 14, b[1] - h + drop / 2 + 3, 'δ_tip', { size: 7.5, color: INK.accent }));
+  body.push(text(b[0] + 6, b[1] - 30, 'pole', { size: 7.5, bold: true }), text(b[0] + R * 0.62, b[1] - h - 4, `arm ${armId}`, { size: 7.5, bold: true, anchor: 'middle' }));
+  body.push(text(8, height - 4, 'dashed: deflected shape, exaggerated; arrows show the positive senses', { size: 6.5, color: INK.muted }));
+  return { svg: svgDocument(width, height, body), width, height };
 }
 
 function differenceText(r: ComparisonRow): string {
@@ -73,6 +121,10 @@ export function handCheckSection(loaded: LoadedDesign, analysis: DesignAnalysis)
       panels: String(2 * check.quadrature.panels),
       integrationError: check.integrationError === 0 ? '0 (exact)' : check.integrationError.toExponential(1),
     }).blocks,
+    (() => {
+      const sk = quantitiesSketch(arm.id);
+      return { kind: 'figure', title: 'The quantities of the hand check', svg: sk.svg, width_pt: sk.width, caption: `Not to scale. The vertical plane of arm ${arm.id}; the pole continues above the joint where it does.` } satisfies Block;
+    })(),
     { kind: 'heading', level: 2, text: 'Moments and displacements by hand' },
     ...check.steps.map((step): Block => ({ kind: 'step', step })),
     { kind: 'heading', level: 2, text: 'Comparison with the matrix analysis' },
