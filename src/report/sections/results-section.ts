@@ -93,11 +93,19 @@ function displacementBlocks(loaded: LoadedDesign, analysis: DesignAnalysis, d: D
 
 function reactionRows(analysis: DesignAnalysis, list: readonly Combination[], d: Display): string[][] {
   const node = analysis.model.supports[0].node;
-  return list.map((c) => {
+  const forces = list.map((c) => {
     const r = resultOf(analysis, c).reactions.find((x) => x.node === node);
     if (!r) throw new Error(`combination ${c.id} has no reaction at node ${node}`);
-    const f = r.force;
-    return [c.id, ...vecText([f[0], f[1], f[2]], 'force', d), ...vecText([f[3], f[4], f[5]], 'moment', d)];
+    return r.force;
+  });
+  // Round-off is judged against the whole table: the largest force, and the largest moment or
+  // that force times the height of the structure, whichever is larger.
+  const height = Math.max(...analysis.model.nodes.map((n) => Math.abs(n.xyz_m[2])));
+  const bigF = Math.max(...forces.flatMap((f) => [f[0], f[1], f[2]].map(Math.abs)));
+  const bigM = Math.max(bigF * height, ...forces.flatMap((f) => [f[3], f[4], f[5]].map(Math.abs)));
+  return list.map((c, k) => {
+    const f = forces[k]!;
+    return [c.id, ...vecText([f[0], f[1], f[2]], 'force', d, bigF), ...vecText([f[3], f[4], f[5]], 'moment', d, bigM)];
   });
 }
 
