@@ -11,7 +11,3 @@ export function readInputBytes(file: string): Buffer {
     throw new InputError([{ file, line: 1, col: 1, path: '', message: `${reason}: cannot read the input file`, severity: 'error' }]);
   }
 }
-
-export function readInputFile(file: string): string {
-  return readInputBytes(file).toString('utf8');
-}
