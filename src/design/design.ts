@@ -111,14 +111,47 @@ export interface IceInput {
   readonly windFactor: number;
 }
 
+export type FatigueCategory = 'I' | 'II' | 'III';
+export type FatigueLoadName = 'galloping' | 'naturalGust' | 'truckGust';
+
+/** One equivalent static fatigue load, switched on. */
+export interface FatigueLoad {
+  /** Pressure before the drag coefficient and the importance factor (galloping has no Cd). */
+  readonly pressure_Pa: number;
+  readonly importance: number;
+}
+
+export interface TruckLane {
+  readonly arm: string;
+  readonly from_m: number;
+  readonly to_m: number;
+}
+
+/** A fatigue detail: its threshold, and the category it came from (null when the threshold was given). */
+export interface FatigueDetail {
+  readonly category: string | null;
+  readonly threshold_Pa: number;
+}
+
 export interface FatigueInput {
-  readonly gallopingPressure_Pa: number | null;
-  readonly naturalGustPressure_Pa: number | null;
-  readonly truckGustPressure_Pa: number | null;
-  readonly importance: { readonly galloping: number; readonly naturalGust: number; readonly truckGust: number };
-  /** Constant-amplitude fatigue threshold of the governing details. */
-  readonly poleBaseThreshold_Pa: number;
-  readonly armRootThreshold_Pa: number;
+  readonly category: FatigueCategory;
+  /** Yearly mean wind speed; the natural gust pressure scales with (V / 11.2 mph)². */
+  readonly meanWindSpeed_mps: number;
+  readonly galloping: FatigueLoad | null;
+  readonly naturalGust: FatigueLoad | null;
+  readonly truckGust: (FatigueLoad & {
+    readonly lanes: readonly TruckLane[];
+    /** Road surface level relative to the pole base (+ above). */
+    readonly roadLevel_m: number;
+    readonly fullPressureHeight_m: number;
+    readonly zeroPressureHeight_m: number;
+    /** Horizontal projected area of attachments seen from above, by id (absent: zero). */
+    readonly horizontalAreas_m2: Readonly<Record<string, number>>;
+  }) | null;
+  readonly drag: { readonly panels: number; readonly roundMembers: number; readonly multisidedMembers: number; readonly points: number };
+  readonly poleBase: FatigueDetail;
+  readonly armRoot: FatigueDetail;
+  readonly anchorBolts: FatigueDetail;
 }
 
 /** Load kinds that combinations put factors on. 'wind' expands to one analysis per direction. */
@@ -139,16 +172,55 @@ export interface AnchorBolts {
   readonly count: number;
   readonly circleDiameter_m: number;
   readonly boltDiameter_m: number;
-  readonly tensileStrength_Pa: number;
+  /** ASTM F1554 grade when given ('36', '55', '105'), else null (strengths given directly). */
+  readonly grade: string | null;
+  readonly Fu_Pa: number;
+  readonly Fy_Pa: number;
+  /** Thread given in the input (threadsPerInch: UNC form; pitch: ISO metric form); null: the
+   * standard coarse thread of the bolt diameter (UNC or ISO, from the tables). */
+  readonly thread: { readonly standard: 'UNC' | 'ISO metric'; readonly pitch_m: number } | null;
+  /** Clear stand-off from the bottom of the leveling nut to the concrete. */
+  readonly standOff_m: number;
+}
+
+export interface BasePlate {
+  readonly thickness_m: number;
+  readonly Fy_Pa: number;
+}
+
+export interface DeflectionLimits {
+  /** Ratios of the member length. */
+  readonly armTipDeadRatio: number;
+  readonly armTipServiceRatio: number;
+  readonly poleTopServiceRatio: number;
+  /** Absolute limit on the arm tip vertical movement under galloping and truck gust. */
+  readonly armTipFatigue_m: number;
+}
+
+export interface VortexCriteria {
+  readonly speedThreshold_mps: number;
+  /** Taper (diameter change per length) at or above which a member is exempt. */
+  readonly exemptTaper: number;
+  readonly strouhalRound: number;
+  readonly strouhalMultisided: number;
 }
 
 export interface Criteria {
-  /** Arm tip deflection limit as a ratio of arm length (e.g. 1/100 -> 0.01), service. */
-  readonly armTipDeflectionRatio: number;
-  /** Pole top horizontal deflection limit as a ratio of pole height, service. */
-  readonly poleTopDeflectionRatio: number;
-  readonly phi: { readonly flexure: number; readonly shear: number; readonly torsion: number; readonly axial: number; readonly boltTension: number; readonly boltShear: number };
+  readonly deflection: DeflectionLimits;
+  /** Effective length factor of the pole and arms as free-standing cantilever columns. */
+  readonly columnK: number;
+  readonly phi: {
+    readonly flexure: number;
+    readonly shear: number;
+    readonly torsion: number;
+    readonly axial: number;
+    readonly tension: number;
+    readonly boltTension: number;
+    readonly boltShear: number;
+  };
   readonly anchorBolts: AnchorBolts | null;
+  readonly basePlate: BasePlate | null;
+  readonly vortex: VortexCriteria;
 }
 
 export interface AnalysisSettings {

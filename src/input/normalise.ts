@@ -1,7 +1,7 @@
 // Validated input (schema output, already in SI) -> the normalised Design, with the
 // checks that the geometry can be built and the assumptions recorded.
 import type {
-  AnalysisSettings, Arm, Attachment, BaseFixity, CombinationSpec, Criteria, Design, FatigueInput, IceInput, Material,
+  AnalysisSettings, Arm, Attachment, BaseFixity, CombinationSpec, Design, IceInput, Material,
   Offset, Pole, Project, StructureKind, WindInput,
 } from '../design/design.ts';
 import { DEG_RAD, formatQuantity, type UnitSystem } from '../units/units.ts';
@@ -11,6 +11,8 @@ import { error, warning, type InputPath, type Problem } from './problem.ts';
 import { packageDate } from './project-date.ts';
 import type { DesignInput, OffsetInput } from './schema.ts';
 import { buildSection } from './section.ts';
+import { buildCriteria } from './criteria.ts';
+import { buildFatigue } from './fatigue.ts';
 import { closest } from './suggest.ts';
 import { windDirections } from './wind-directions.ts';
 
@@ -63,7 +65,7 @@ export function normalise(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?
   const attachments = buildAttachments(input, arms, system, problems, log);
   const wind = buildWind(input, arms, attachments, log, problems);
   const ice = buildIce(input, log);
-  const fatigue = buildFatigue(input, log);
+  const fatigue = buildFatigue(input, log, problems);
   const criteria = buildCriteria(input, log, problems);
   const useDefaultSet = input.combinations === undefined || input.combinations === 'default';
   if (!useDefaultSet && input.criteria?.serviceWindFactor !== undefined) {
@@ -279,45 +281,6 @@ function buildIce(input: DesignInput, log: AssumptionLog): IceInput | null {
   const ice = input.loads.ice;
   if (!ice) return null;
   return { weightPerArea_Pa: log.take('iceWeight', ice.weightPerArea), windFactor: ice.windFactor };
-}
-
-function buildFatigue(input: DesignInput, log: AssumptionLog): FatigueInput | null {
-  const f = input.loads.fatigue;
-  if (!f) return null;
-  const imp = (k: 'galloping' | 'naturalGust' | 'truckGust') =>
-    log.take('fatigueImportance', f.importance?.[k], { key: `loads.fatigue.importance.${k}`, label: `Fatigue importance factor, ${k}` });
-  return {
-    gallopingPressure_Pa: f.galloping ?? null,
-    naturalGustPressure_Pa: f.naturalGust ?? null,
-    truckGustPressure_Pa: f.truckGust ?? null,
-    importance: { galloping: imp('galloping'), naturalGust: imp('naturalGust'), truckGust: imp('truckGust') },
-    poleBaseThreshold_Pa: f.poleBaseThreshold,
-    armRootThreshold_Pa: f.armRootThreshold,
-  };
-}
-
-function buildCriteria(input: DesignInput, log: AssumptionLog, problems: Problem[]): Criteria {
-  const c = input.criteria ?? {};
-  const r = c.resistanceFactors ?? {};
-  const bolts = c.anchorBolts;
-  if (bolts && bolts.boltDiameter >= bolts.circleDiameter) {
-    problems.push(error(['criteria', 'anchorBolts', 'boltDiameter'], 'the bolt diameter is at or over the bolt circle diameter; expected a bolt much smaller than the circle'));
-  }
-  return {
-    armTipDeflectionRatio: log.take('armTipDeflection', c.armTipDeflectionLimit),
-    poleTopDeflectionRatio: log.take('poleTopDeflection', c.poleTopDeflectionLimit),
-    phi: {
-      flexure: log.take('phiFlexure', r.flexure),
-      shear: log.take('phiShear', r.shear),
-      torsion: log.take('phiTorsion', r.torsion),
-      axial: log.take('phiAxial', r.axial),
-      boltTension: log.take('phiBoltTension', r.boltTension),
-      boltShear: log.take('phiBoltShear', r.boltShear),
-    },
-    anchorBolts: bolts
-      ? { count: bolts.count, circleDiameter_m: bolts.circleDiameter, boltDiameter_m: bolts.boltDiameter, tensileStrength_Pa: bolts.tensileStrength }
-      : null,
-  };
 }
 
 /** Result stations per member at the regular spacing, at most: a spacing of a hair on a pole

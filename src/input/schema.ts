@@ -6,6 +6,7 @@ import { z } from 'zod';
 import type { UnitSystem } from '../units/units.ts';
 import { defaultNote } from './defaults.ts';
 import { factor, quantity } from './quantity.ts';
+import { criteriaSchema, fatigueSchema } from './schema-checks.ts';
 
 export const INPUT_FORMAT_VERSION = 1;
 export const STRUCTURE_KIND_VALUES = ['cantilever-sign', 'luminaire-pole', 'signal-support'] as const;
@@ -30,21 +31,6 @@ const isoDate = (description: string) =>
       const d = new Date(`${s}T00:00:00Z`);
       return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s;
     }, { error: 'not a calendar date; expected yyyy-mm-dd' })
-    .meta({ description });
-
-/** A deflection limit: "L/100", "1/100" or a fraction such as 0.01. */
-const deflectionLimit = (description: string) =>
-  z
-    .union([z.number(), z.string()])
-    .transform((raw, ctx) => {
-      const m = typeof raw === 'string' ? /^\s*(?:L|1)\s*\/\s*(\d+(?:\.\d+)?)\s*$/.exec(raw) : null;
-      const value = typeof raw === 'number' ? raw : m ? 1 / Number(m[1]) : NaN;
-      if (!(value > 0 && value < 1)) {
-        ctx.addIssue({ code: 'custom', message: `expected a limit such as "L/100" or a fraction between 0 and 1, got ${JSON.stringify(raw)}` });
-        return z.NEVER;
-      }
-      return value;
-    })
     .meta({ description });
 
 function sectionSchema(system: UnitSystem) {
@@ -142,56 +128,20 @@ function iceSchema(system: UnitSystem) {
   });
 }
 
-function fatigueSchema(system: UnitSystem) {
-  const p = (what: string) => quantity('pressure', system, 'nonNegative', `Equivalent static pressure, ${what}`).optional();
-  const importance = (what: string) => factor(`Importance factor, ${what}. ${defaultNote('fatigueImportance')}`, 0, 2).optional();
-  return z.strictObject({
-    galloping: p('galloping (vertical, on attachment area)'),
-    naturalGust: p('natural wind gust'),
-    truckGust: p('truck-induced gust'),
-    importance: z
-      .strictObject({ galloping: importance('galloping'), naturalGust: importance('natural wind gust'), truckGust: importance('truck-induced gust') })
-      .optional(),
-    poleBaseThreshold: quantity('stress', system, 'positive', 'Constant-amplitude fatigue threshold of the pole base detail'),
-    armRootThreshold: quantity('stress', system, 'positive', 'Constant-amplitude fatigue threshold of the arm root detail'),
-  });
-}
-
 function combinationSchema() {
   const f = (kind: string) => factor(`Load factor on ${kind}`, -5, 5).optional();
   return z.strictObject({
     id: id('Combination id'),
-    category: z.enum(['strength', 'extreme-wind', 'extreme-ice', 'service', 'fatigue']),
+    category: z
+      .enum(['strength', 'extreme-wind', 'extreme-ice', 'service'], {
+        error: (iss) =>
+          iss.input === 'fatigue'
+            ? 'fatigue is not a combination category here: the fatigue load cases are made from loads.fatigue and each is analysed alone'
+            : 'expected strength, extreme-wind, extreme-ice or service',
+      })
+      .meta({ description: 'strength | extreme-wind | extreme-ice | service (the category decides which checks use it; fatigue cases come from loads.fatigue)' }),
     description: text('What the combination is').optional(),
     factors: z.strictObject({ dead: f('dead load'), wind: f('wind'), ice: f('ice weight'), iceWind: f('wind with ice') }),
-  });
-}
-
-function criteriaSchema(system: UnitSystem) {
-  const phi = (name: 'phiFlexure' | 'phiShear' | 'phiTorsion' | 'phiAxial' | 'phiBoltTension' | 'phiBoltShear', what: string) =>
-    factor(`Resistance factor, ${what}. ${defaultNote(name)}`, 0, 1, false).optional();
-  return z.strictObject({
-    armTipDeflectionLimit: deflectionLimit(`Service deflection limit of arm tips, "L/n" or a fraction. ${defaultNote('armTipDeflection')}`).optional(),
-    poleTopDeflectionLimit: deflectionLimit(`Service deflection limit of the pole top, "L/n" or a fraction. ${defaultNote('poleTopDeflection')}`).optional(),
-    serviceWindFactor: factor(`Factor on wind in the service combination. ${defaultNote('serviceWindFactor')}`, 0, 2, false).optional(),
-    resistanceFactors: z
-      .strictObject({
-        flexure: phi('phiFlexure', 'flexure'),
-        shear: phi('phiShear', 'shear'),
-        torsion: phi('phiTorsion', 'torsion'),
-        axial: phi('phiAxial', 'axial compression'),
-        boltTension: phi('phiBoltTension', 'anchor bolt tension'),
-        boltShear: phi('phiBoltShear', 'anchor bolt shear'),
-      })
-      .optional(),
-    anchorBolts: z
-      .strictObject({
-        count: z.int({ error: 'expected a whole number of bolts' }).min(3, { error: 'at least 3 anchor bolts are needed' }).max(64, { error: 'at most 64 anchor bolts' }),
-        circleDiameter: quantity('section', system, 'positive', 'Diameter of the bolt circle'),
-        boltDiameter: quantity('section', system, 'positive', 'Nominal bolt diameter'),
-        tensileStrength: quantity('stress', system, 'positive', 'Specified minimum tensile strength of the bolt steel'),
-      })
-      .optional(),
   });
 }
 

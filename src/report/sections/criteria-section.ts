@@ -38,12 +38,16 @@ export function criteriaSection(loaded: LoadedDesign): DocSection {
     header: [...ITEM_VALUE],
     widths: ['*', 150],
     rows: [
-      ['Arm tip deflection limit, service (L = arm length)', fractionText(c.armTipDeflectionRatio, 'L')],
-      ['Pole top horizontal deflection limit, service (H = pole height)', fractionText(c.poleTopDeflectionRatio, 'H')],
+      ['Arm tip vertical deflection, unfactored dead load (L = arm length)', fractionText(c.deflection.armTipDeadRatio, 'L')],
+      ['Arm tip horizontal deflection, service combinations (L = arm length)', fractionText(c.deflection.armTipServiceRatio, 'L')],
+      ['Pole top horizontal deflection, service combinations (H = pole height)', fractionText(c.deflection.poleTopServiceRatio, 'H')],
+      ...(design.fatigue ? [['Arm tip vertical deflection, galloping and truck gust fatigue loads', d.q(c.deflection.armTipFatigue_m, 'section')]] : []),
+      ['Effective length factor K of the pole and arms as cantilever columns (dimensionless)', formatNumber(c.columnK)],
       ['Resistance factor φ, flexure (dimensionless)', formatNumber(c.phi.flexure)],
       ['Resistance factor φ, shear (dimensionless)', formatNumber(c.phi.shear)],
       ['Resistance factor φ, torsion (dimensionless)', formatNumber(c.phi.torsion)],
-      ['Resistance factor φ, axial (dimensionless)', formatNumber(c.phi.axial)],
+      ['Resistance factor φ, axial compression (dimensionless)', formatNumber(c.phi.axial)],
+      ['Resistance factor φ, axial tension (dimensionless)', formatNumber(c.phi.tension)],
       ['Resistance factor φ, anchor bolt tension (dimensionless)', formatNumber(c.phi.boltTension)],
       ['Resistance factor φ, anchor bolt shear (dimensionless)', formatNumber(c.phi.boltShear)],
     ],
@@ -51,7 +55,7 @@ export function criteriaSection(loaded: LoadedDesign): DocSection {
 
   const bolts = c.anchorBolts;
   if (bolts === null) {
-    blocks.push({ kind: 'paragraph', text: 'No anchor bolts were entered: the package gives no anchor-bolt forces.' });
+    blocks.push({ kind: 'paragraph', text: 'No anchor bolts were entered (criteria.anchorBolts): the anchor-bolt checks cannot be made and are reported as failed for that reason.' });
   } else {
     blocks.push({
       kind: 'table',
@@ -62,10 +66,20 @@ export function criteriaSection(loaded: LoadedDesign): DocSection {
         ['Number of bolts', `${bolts.count} bolts`],
         ['Bolt circle diameter', d.q(bolts.circleDiameter_m, 'section')],
         ['Bolt diameter', d.q(bolts.boltDiameter_m, 'section')],
-        ['Bolt tensile strength', d.q(bolts.tensileStrength_Pa, 'stress')],
+        ['Bolt steel', bolts.grade !== null ? `ASTM F1554 Grade ${bolts.grade}` : 'strengths as given'],
+        ['Bolt tensile strength, Fu', d.q(bolts.Fu_Pa, 'stress')],
+        ['Bolt yield strength, Fy', d.q(bolts.Fy_Pa, 'stress')],
+        ['Clear stand-off below the leveling nut', d.q(bolts.standOff_m, 'section')],
       ],
     });
   }
+
+  const plate = c.basePlate;
+  blocks.push(
+    plate === null
+      ? { kind: 'paragraph', text: 'No base plate was entered (criteria.basePlate): the base plate check cannot be made and is reported as failed for that reason.' }
+      : { kind: 'table', title: 'Base plate', header: [...ITEM_VALUE], widths: ['*', 150], rows: [['Plate thickness', d.q(plate.thickness_m, 'section')], ['Plate yield strength, Fy', d.q(plate.Fy_Pa, 'stress')]] },
+  );
 
   blocks.push({
     kind: 'table',

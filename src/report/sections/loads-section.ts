@@ -18,7 +18,11 @@ const LOAD_KINDS: readonly { kind: LoadKind; label: string }[] = [
 ];
 
 function fatigueBlocks(f: FatigueInput, d: Display): Block[] {
-  const pressure = (p: number | null) => (p === null ? 'not applied' : d.q(p, 'pressure'));
+  const on = (l: { pressure_Pa: number; importance: number } | null, what: string): string[][] =>
+    l === null
+      ? [[`${what}`, 'not applied']]
+      : [[`${what}: equivalent static pressure (before Cd and I_F)`, d.q(l.pressure_Pa, 'pressure')], [`${what}: importance factor I_F (dimensionless)`, formatNumber(l.importance)]];
+  const detail = (x: { category: string | null; threshold_Pa: number }) => `${d.q(x.threshold_Pa, 'stress')}${x.category !== null ? ` (category ${x.category})` : ''}`;
   return [
     {
       kind: 'table',
@@ -26,14 +30,15 @@ function fatigueBlocks(f: FatigueInput, d: Display): Block[] {
       header: ['Item', 'Value'],
       widths: ['*', 150],
       rows: [
-        ['Galloping: equivalent static pressure, vertical, on attachment area', pressure(f.gallopingPressure_Pa)],
-        ['Natural wind gust: equivalent static pressure', pressure(f.naturalGustPressure_Pa)],
-        ['Truck-induced gust: equivalent static pressure', pressure(f.truckGustPressure_Pa)],
-        ['Importance factor, galloping (dimensionless)', formatNumber(f.importance.galloping)],
-        ['Importance factor, natural wind gust (dimensionless)', formatNumber(f.importance.naturalGust)],
-        ['Importance factor, truck-induced gust (dimensionless)', formatNumber(f.importance.truckGust)],
-        ['Constant-amplitude fatigue threshold, pole base detail', d.q(f.poleBaseThreshold_Pa, 'stress')],
-        ['Constant-amplitude fatigue threshold, arm root detail', d.q(f.armRootThreshold_Pa, 'stress')],
+        ['Fatigue importance category', f.category],
+        ['Yearly mean wind speed at the site', d.q(f.meanWindSpeed_mps, 'speed')],
+        ...on(f.galloping, 'Galloping'),
+        ...on(f.naturalGust, 'Natural wind gust'),
+        ...on(f.truckGust, 'Truck-induced gust'),
+        ['Drag coefficients Cd: panels, round tubes, multisided tubes, point attachments (dimensionless)', [f.drag.panels, f.drag.roundMembers, f.drag.multisidedMembers, f.drag.points].map((x) => formatNumber(x)).join(', ')],
+        ['Constant-amplitude fatigue threshold, pole base detail', detail(f.poleBase)],
+        ['Constant-amplitude fatigue threshold, arm root detail', detail(f.armRoot)],
+        ['Constant-amplitude fatigue threshold, anchor bolts', detail(f.anchorBolts)],
       ],
     },
   ];
