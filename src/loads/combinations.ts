@@ -1,6 +1,7 @@
 // Expanding the combination specs of the design into the combinations to analyse: a spec
 // with a 'wind' or 'ice-wind' factor becomes one combination per wind direction
-// ('extreme-wind-max@wind-090'); the others are analysed once.
+// ('extreme-wind-max@wind-090'); the others are analysed once. Each fatigue load case becomes a
+// combination of its own (category fatigue, factor 1).
 import type { CombinationSpec, Design, LoadKind } from '../design/design.ts';
 import { DEAD_CASE_ID, directionKey, ICE_CASE_ID, iceWindCaseId, windCaseId } from './case-ids.ts';
 import type { Combination, LoadCase } from './load-types.ts';
@@ -34,8 +35,16 @@ export function expandCombinations(design: Design, cases: readonly LoadCase[]): 
       });
     }
   }
+  // Each fatigue case is analysed alone at factor 1: its results are stress ranges.
+  for (const lc of cases) {
+    if (lc.kind !== 'fatigue') continue;
+    out.push({ id: lc.id, specId: lc.id, category: 'fatigue', description: lc.description, factors: [{ caseId: lc.id, factor: 1 }], source: FATIGUE_COMBINATION_SOURCE });
+  }
   return out;
 }
+
+export const FATIGUE_COMBINATION_SOURCE =
+  'each fatigue load alone at a load factor of 1.0 (fatigue limit state for infinite life, AASHTO LRFD-LTS from memory); verify against the governing code';
 
 function caseIdFor(kind: LoadKind, angle: number | null): string {
   switch (kind) {

@@ -48,7 +48,7 @@ export type AppliedLoad = NodalLoad | DistributedLoad | ElementPointLoad;
 
 export interface LoadCase {
   readonly id: string; // 'dead', 'wind-090', 'ice', ...
-  readonly kind: 'dead' | 'wind' | 'ice' | 'ice-wind';
+  readonly kind: 'dead' | 'wind' | 'ice' | 'ice-wind' | 'fatigue';
   readonly description: string;
   /** Plan direction the wind blows toward, for wind cases. */
   readonly windAngle_rad: number | null;

@@ -6,6 +6,7 @@ import type { CalcStep } from '../../calc/step.ts';
 import type { LoadedDesign } from '../../design/design.ts';
 import { LOAD_RULES, loadResultant } from '../../loads/index.ts';
 import type { LoadCase } from '../../loads/load-types.ts';
+import { FATIGUE_RULES } from '../../loads/fatigue-load.ts';
 import type { Block, DocSection } from '../document.ts';
 import { display } from './display.ts';
 import { stepsTable } from './step-table.ts';
@@ -32,6 +33,13 @@ const KIND_TEXT: Readonly<Record<LoadCase['kind'], string>> = {
   wind: 'wind',
   ice: 'ice',
   'ice-wind': 'wind with ice',
+  fatigue: 'fatigue',
+};
+
+const FATIGUE_RULE_LABEL: Readonly<Record<keyof typeof FATIGUE_RULES, string>> = {
+  galloping: 'Fatigue: galloping',
+  naturalGust: 'Fatigue: natural wind gust',
+  truckGust: 'Fatigue: truck-induced gust',
 };
 
 /** A step's form: steps of one form differ only in their values. */
@@ -46,7 +54,10 @@ export function loadCasesSection(loaded: LoadedDesign, analysis: DesignAnalysis)
     title: 'Rules by which the loads are found',
     header: ['Rule', 'Statement and source'],
     widths: [110, '*'],
-    rows: (Object.keys(RULE_LABEL) as (keyof typeof LOAD_RULES)[]).map((k) => [RULE_LABEL[k], LOAD_RULES[k]]),
+    rows: [
+      ...(Object.keys(RULE_LABEL) as (keyof typeof LOAD_RULES)[]).map((k) => [RULE_LABEL[k], LOAD_RULES[k]]),
+      ...(design.fatigue ? (Object.keys(FATIGUE_RULE_LABEL) as (keyof typeof FATIGUE_RULES)[]).map((k) => [FATIGUE_RULE_LABEL[k], FATIGUE_RULES[k]]) : []),
+    ],
   });
   // The sources the steps cite, listed once and referred to by number in the tables.
   const sources = [...new Set(analysis.cases.flatMap((lc) => lc.steps.map((st) => st.source)))];
