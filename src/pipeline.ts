@@ -11,6 +11,10 @@ import type { DocumentModel } from './report/document.ts';
 import { resultsJson } from './export/results-json.ts';
 import { toolVersion } from './version.ts';
 import { analysisSummaryLines } from './analysis-summary.ts';
+import { runChecks } from './checks/run-checks.ts';
+import type { CheckResults } from './checks/check-types.ts';
+import { checkSummaryLines } from './checks/check-summary.ts';
+import { checkSections } from './report/sections/check-sections.ts';
 
 export interface BuildOptions {
   readonly env?: Readonly<Record<string, string | undefined>>;
@@ -21,6 +25,7 @@ export interface BuildOptions {
 export interface PackageResult {
   readonly loaded: LoadedDesign;
   readonly analysis: DesignAnalysis;
+  readonly checks: CheckResults;
   readonly document: DocumentModel;
   readonly pdf: Buffer;
   /** The results as JSON text, when asked for. */
@@ -33,10 +38,12 @@ export interface PackageResult {
 export async function buildPackage(file: string, opts: BuildOptions = {}): Promise<PackageResult> {
   const loaded = loadDesignFile(file, { SOURCE_DATE_EPOCH: opts.env?.SOURCE_DATE_EPOCH });
   const analysis = analyseDesign(loaded.design, { firstOrder: opts.firstOrder });
-  const document = buildDocument(loaded, { sections: analysisSections(loaded, analysis) });
+  const checks = runChecks(loaded.design, analysis);
+  const document = buildDocument(loaded, { sections: [...analysisSections(loaded, analysis), ...checkSections(loaded, analysis, checks)] });
   const pdf = await renderPdf(document);
   const json = opts.json
-    ? resultsJson({ loaded, toolVersion: toolVersion(), ...analysis, secondOrder: analysis.options.secondOrder })
+    ? resultsJson({ loaded, toolVersion: toolVersion(), ...analysis, secondOrder: analysis.options.secondOrder, checks })
     : null;
-  return { loaded, analysis, document, pdf, json, summary: analysisSummaryLines(loaded.design, analysis), checksFail: false };
+  const summary = [...analysisSummaryLines(loaded.design, analysis), ...checkSummaryLines(loaded.design, checks)];
+  return { loaded, analysis, checks, document, pdf, json, summary, checksFail: checks.fails };
 }

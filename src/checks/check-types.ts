@@ -9,7 +9,9 @@ import type { CalcStep, Qty } from '../calc/step.ts';
 export type CheckType =
   | 'member-strength' // combined axial, flexure, shear, torsion at a station (H3-6)
   | 'member-wall' // wall slenderness D/t or b/t within the specification's range
-  | 'deflection' // arm tip, pole top against the user's limits
+  | 'deflection-dead' // arm tip vertical under the unfactored dead load
+  | 'deflection-service' // arm tip and pole top horizontal under the service combinations
+  | 'deflection-fatigue' // arm tip vertical under galloping and truck gust
   | 'bolt-tension'
   | 'bolt-shear'
   | 'bolt-combined' // tension with shear (AISC 360 J3.7)

@@ -8,6 +8,9 @@ import type { AnalysisResults, Mode } from '../analysis/analysis-types.ts';
 import type { LoadedDesign } from '../design/design.ts';
 import { scaleLoad } from '../loads/scale-load.ts';
 import { combinedLoads } from '../analysis/analyze.ts';
+import type { CheckRecord, CheckResults } from '../checks/check-types.ts';
+import { verdictByType } from '../checks/verdict.ts';
+import type { Dim } from '../units/units.ts';
 
 export const RESULTS_FORMAT = 'polebook-results';
 export const RESULTS_FORMAT_VERSION = 1;
@@ -21,6 +24,31 @@ export interface ResultsJsonInput {
   readonly results: AnalysisResults;
   readonly modes: readonly Mode[];
   readonly secondOrder: boolean;
+  readonly checks: CheckResults;
+}
+
+/** SI unit of each kind of quantity, for the check records. */
+const SI_UNIT: Readonly<Record<Dim, string>> = {
+  length: 'm', section: 'm', area: 'm2', force: 'N', weight: 'N', moment: 'N*m', pressure: 'Pa', stress: 'Pa', density: 'kg/m3',
+  lineLoad: 'N/m', rotStiffness: 'N*m/rad', angle: 'rad', taper: 'm/m', speed: 'm/s', frequency: 'Hz', sectionArea: 'm2',
+  inertia: 'm4', modulus: 'm3', mass: 'kg', ratio: '1',
+};
+
+function checkRecord(r: CheckRecord): Record<string, unknown> {
+  return {
+    type: r.type, label: r.label, member: r.member, s_m: r.s_m, combination: r.combination,
+    demand: { value: r.demand.si, unit: SI_UNIT[r.demand.dim] }, capacity: { value: r.capacity.si, unit: SI_UNIT[r.capacity.dim] },
+    ratio: Number.isFinite(r.ratio) ? r.ratio : null, equation: r.equation, status: r.status, pass: r.status !== 'fail', reason: r.reason,
+  };
+}
+
+function checksRecord(c: CheckResults): Record<string, unknown> {
+  return {
+    note: 'Every check record; ratio = |demand| / capacity, null when the check cannot be made (then status is fail and reason says why). status warn: outside the checks polebook makes, for the engineer to judge; it does not fail the build.',
+    fails: c.fails,
+    verdict: verdictByType(c.records).map((v) => ({ type: v.type, title: v.title, count: v.count, failures: v.failures, warnings: v.warnings, worst: checkRecord(v.worst) })),
+    records: c.records.map(checkRecord),
+  };
 }
 
 const COLUMNS = {
@@ -104,6 +132,7 @@ export function resultsJson(input: ResultsJsonInput): string {
       members: Object.values(r.members).map((m) => ({ member: m.member, extremes: m.extremes, stations: m.stations })),
     })),
     modes: input.modes.map((m) => ({ mode: m.mode, frequency_Hz: m.frequency_Hz, period_s: m.period_s, effectiveMassRatio: m.effectiveMassRatio, shape: m.shape })),
+    checks: checksRecord(input.checks),
   };
   return `${JSON.stringify(doc, null, 1)}\n`;
 }

@@ -22,8 +22,8 @@ function factorText(f: number): string {
   return t.includes('.') ? t : `${t}.0`;
 }
 
-function spec(id: string, category: CombinationSpec['category'], what: string, factors: Partial<Record<LoadKind, number>>): CombinationSpec {
-  return { id, category, description: `${what}: ${describeFactors(factors)}`, factors, source: COMBINATION_SOURCE };
+function spec(id: string, category: CombinationSpec['category'], what: string, factors: Partial<Record<LoadKind, number>>, source = COMBINATION_SOURCE): CombinationSpec {
+  return { id, category, description: `${what}: ${describeFactors(factors)}`, factors, source };
 }
 
 export function defaultCombinations(hasIce: boolean, serviceWindFactor: number): CombinationSpec[] {
@@ -32,9 +32,29 @@ export function defaultCombinations(hasIce: boolean, serviceWindFactor: number):
     spec('extreme-wind-max', 'extreme-wind', 'Extreme wind, dead load at its upper factor', { dead: 1.1, wind: 1.0 }),
     spec('extreme-wind-min', 'extreme-wind', 'Extreme wind, dead load at its lower factor', { dead: 0.9, wind: 1.0 }),
     spec('service-wind', 'service', 'Service, for deflections', { dead: 1.0, wind: serviceWindFactor }),
+    deadServiceSpec(COMBINATION_SOURCE),
   ];
   if (hasIce) list.push(spec('extreme-ice', 'extreme-ice', 'Extreme, ice with wind on the iced structure', { dead: 1.1, ice: 1.0, 'ice-wind': 1.0 }));
   return list;
+}
+
+/** The unfactored dead load alone, for the dead-load deflection of the arm tips. */
+export const DEAD_SERVICE_ID = 'service-dead';
+
+function deadServiceSpec(source: string): CombinationSpec {
+  return spec(DEAD_SERVICE_ID, 'service', 'Service, dead load alone, for the dead-load deflection of the arm tips', { dead: 1.0 }, source);
+}
+
+/** Whether a combination is the unfactored dead load alone. */
+export const isDeadOnly = (c: CombinationSpec): boolean => c.factors.dead === 1 && Object.entries(c.factors).every(([k, f]) => k === 'dead' || f === undefined || f === 0);
+
+/** A user's list gets the dead-alone service combination when it has none (the deflection check needs it). */
+export function withDeadService(list: CombinationSpec[]): CombinationSpec[] {
+  if (list.some((c) => c.category === 'service' && isDeadOnly(c))) return list;
+  const taken = new Set(list.map((c) => c.id));
+  let id = DEAD_SERVICE_ID;
+  for (let k = 2; taken.has(id); k++) id = `${DEAD_SERVICE_ID}-${k}`;
+  return [...list, { ...deadServiceSpec('added by polebook: the list of combinations has no unfactored dead load alone, which the dead-load deflection check of the arm tips needs'), id }];
 }
 
 type CombinationInput = Exclude<NonNullable<DesignInput['combinations']>, 'default'>[number];

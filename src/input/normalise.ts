@@ -6,7 +6,7 @@ import type {
 } from '../design/design.ts';
 import { DEG_RAD, formatQuantity, type UnitSystem } from '../units/units.ts';
 import { AssumptionLog } from './assumptions.ts';
-import { defaultCombinations, userCombinations } from './combinations.ts';
+import { defaultCombinations, userCombinations, withDeadService } from './combinations.ts';
 import { error, warning, type InputPath, type Problem } from './problem.ts';
 import { packageDate } from './project-date.ts';
 import type { DesignInput, OffsetInput } from './schema.ts';
@@ -74,7 +74,7 @@ export function normalise(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?
   const combinations: CombinationSpec[] =
     input.combinations === undefined || input.combinations === 'default'
       ? defaultCombinations(ice !== null, log.take('serviceWindFactor', input.criteria?.serviceWindFactor))
-      : userCombinations(input.combinations, ice !== null, problems);
+      : withDeadService(userCombinations(input.combinations, ice !== null, problems));
   const analysis = buildAnalysis(input, log, problems);
 
   if (problems.some((p) => p.severity === 'error') || !pole) return { design: undefined, problems };

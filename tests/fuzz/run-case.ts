@@ -8,6 +8,7 @@ import { loadDesignText } from '../../src/input/index.ts';
 import { analyseDesign } from '../../src/analyse-design.ts';
 import { buildDocument } from '../../src/report/sections/build-document.ts';
 import { analysisSections } from '../../src/report/sections/analysis-sections.ts';
+import { runChecks } from '../../src/checks/run-checks.ts';
 import { resultsJson } from '../../src/export/results-json.ts';
 import { analysisSummaryLines } from '../../src/analysis-summary.ts';
 import { InputError, UnstableStructureError, formatDiagnostic } from '../../src/errors.ts';
@@ -102,7 +103,9 @@ export function runLibrary(text: string, file: string): Outcome {
       ...nonFinite(buildDocument(loaded, { sections: analysisSections(loaded, analysis) }), { text: scanText }),
       ...nonFinite(analysisSummaryLines(loaded.design, analysis), { text: scanText }),
     ];
-    const json = resultsJson({ loaded, toolVersion: 'fuzz', ...analysis, secondOrder: analysis.options.secondOrder });
+    const checks = runChecks(loaded.design, analysis);
+    bad.push(...nonFinite(checks.records.map((r) => ({ demand: r.demand.si, capacity: r.capacity.si })), { text: scanText }));
+    const json = resultsJson({ loaded, toolVersion: 'fuzz', ...analysis, secondOrder: analysis.options.secondOrder, checks });
     bad.push(...nullQuantities(json).map((k) => `JSON ${k} is null (NaN or Infinity)`));
     if (bad.length > 0) return { kind: 'failure', reason: `non-finite output: ${bad.slice(0, 5).join('; ')}` };
   } catch (err) {

@@ -11,9 +11,6 @@ export const CATEGORY_TEXT: Readonly<Record<CombinationCategory, string>> = {
   fatigue: 'fatigue',
 };
 
-/** True for the categories whose loads carry load factors for strength checks. */
-export const isFactored = (c: CombinationCategory): boolean => c === 'strength' || c === 'extreme-wind' || c === 'extreme-ice';
-
 /** "1.1 × dead + 1 × wind-090" (factors are dimensionless). */
 export function factorsText(c: Combination): string {
   return c.factors.map((f) => `${formatNumber(f.factor)} × ${f.caseId}`).join(' + ');

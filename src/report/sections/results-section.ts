@@ -9,7 +9,7 @@ import type { Combination } from '../../loads/load-types.ts';
 import type { FrameModel, Vec3 } from '../../model/frame.ts';
 import { formatNumber } from '../../units/units.ts';
 import type { Block, DocSection } from '../document.ts';
-import { isFactored } from './combination-labels.ts';
+import { isFactored } from '../../checks/combination-use.ts';
 import { display, memberText, type Display } from './display.ts';
 import { templateBlocks } from './templates.ts';
 import { vecText } from './vector-text.ts';

@@ -1,0 +1,76 @@
+// Section "Design checks": the verdict by check type, the governing check of each type and
+// member worked in full, and for each member and combination the station that governs.
+// Reads the check records; computes no engineering.
+import type { DesignAnalysis } from '../../analyse-design.ts';
+import type { CheckRecord, CheckResults } from '../../checks/check-types.ts';
+import { CHECK_TITLES, verdictByType } from '../../checks/verdict.ts';
+import type { LoadedDesign } from '../../design/design.ts';
+import type { Block, DocSection } from '../document.ts';
+import { display, memberText, type Display } from './display.ts';
+import { templateBlocks } from './templates.ts';
+
+export const CHECKS_TITLE = 'Design checks';
+
+const STATUS_TEXT: Readonly<Record<CheckRecord['status'], string>> = { ok: 'pass', fail: 'FAIL', warn: 'warning' };
+
+export function checkSections(loaded: LoadedDesign, analysis: DesignAnalysis, checks: CheckResults): DocSection[] {
+  const { design } = loaded;
+  const d = display(design.units);
+  const blocks: Block[] = [
+    ...templateBlocks('checks', {
+      analysisOrder: analysis.options.secondOrder
+        ? 'The demands come from the second-order (P-delta) analysis of each combination.'
+        : 'The demands come from a first-order analysis (--first-order or analysis.secondOrder: false): second-order effects are not in them.',
+    }).blocks,
+  ];
+  const verdict = verdictByType(checks.records);
+  blocks.push({
+    kind: 'table',
+    title: 'Verdict by check type',
+    header: ['Check', 'Worst ratio', 'Result', 'Where', 'Combination', 'Records (failing, warnings)'],
+    widths: ['*', 44, 40, 80, 90, 62],
+    rows: verdict.map((v) => [v.title, ratioText(v.worst), STATUS_TEXT[v.worst.status], placeText(v.worst, d), v.worst.combination ?? '—', `${v.count} (${v.failures}, ${v.warnings})`]),
+    note: 'Ratio = |demand| / capacity; "not made" when the check cannot be made (it fails, with its reason below).',
+  });
+  for (const g of checks.governing) {
+    const r = g.record;
+    blocks.push({ kind: 'heading', level: 2, text: `${CHECK_TITLES[r.type]}: ${memberText(r.member)}` });
+    blocks.push({ kind: 'paragraph', text: recordSentence(r, d) });
+    for (const step of g.steps) blocks.push({ kind: 'step', step });
+    const rows = worstPerCombination(checks.records.filter((x) => x.type === r.type && x.member === r.member));
+    if (rows.length > 1) {
+      blocks.push({
+        kind: 'table',
+        title: `${CHECK_TITLES[r.type]}, ${memberText(r.member)}: governing station of each combination`,
+        header: ['Combination', 'Station', 'Demand', 'Capacity', 'Ratio', 'Result'],
+        widths: ['*', 60, 70, 70, 40, 40],
+        rows: rows.map((x) => [x.combination ?? '—', x.s_m === null ? '—' : d.q(x.s_m, 'length'), d.q(x.demand.si, x.demand.dim), d.q(x.capacity.si, x.capacity.dim), ratioText(x), STATUS_TEXT[x.status]]),
+      });
+    }
+  }
+  return [{ id: 'checks', title: CHECKS_TITLE, blocks }];
+}
+
+const ratioText = (r: CheckRecord): string => (Number.isFinite(r.ratio) ? r.ratio.toFixed(3) : 'not made');
+
+function placeText(r: CheckRecord, d: Display): string {
+  const who = r.member === 'anchor-bolts' ? 'anchor bolts' : r.member === 'base-plate' ? 'base plate' : memberText(r.member);
+  return r.s_m === null ? who : `${who}, ${d.q(r.s_m, 'length')}`;
+}
+
+function recordSentence(r: CheckRecord, d: Display): string {
+  const where = `${placeText(r, d)}${r.combination !== null ? `, under ${r.combination}` : ''}`;
+  const head = `${r.label} at ${where}: demand ${d.q(r.demand.si, r.demand.dim)}, capacity ${d.q(r.capacity.si, r.capacity.dim)}, ratio ${ratioText(r)}: ${STATUS_TEXT[r.status]}. Equation: ${r.equation}.`;
+  return r.reason === '' ? head : `${head} ${r.reason[0]!.toUpperCase()}${r.reason.slice(1)}.`;
+}
+
+/** The record with the largest ratio for each combination, in the order the combinations first appear. */
+function worstPerCombination(list: readonly CheckRecord[]): CheckRecord[] {
+  const best = new Map<string, CheckRecord>();
+  for (const r of list) {
+    const k = r.combination ?? '';
+    const b = best.get(k);
+    if (!b || r.ratio > b.ratio) best.set(k, r);
+  }
+  return [...best.values()];
+}
