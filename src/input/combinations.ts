@@ -32,9 +32,9 @@ export function defaultCombinations(hasIce: boolean, serviceWindFactor: number):
     spec('extreme-wind-max', 'extreme-wind', 'Extreme wind, dead load at its upper factor', { dead: 1.1, wind: 1.0 }),
     spec('extreme-wind-min', 'extreme-wind', 'Extreme wind, dead load at its lower factor', { dead: 0.9, wind: 1.0 }),
     spec('service-wind', 'service', 'Service, for deflections', { dead: 1.0, wind: serviceWindFactor }),
-    deadServiceSpec(COMBINATION_SOURCE),
   ];
   if (hasIce) list.push(spec('extreme-ice', 'extreme-ice', 'Extreme, ice with wind on the iced structure', { dead: 1.1, ice: 1.0, 'ice-wind': 1.0 }));
+  list.push(deadServiceSpec(COMBINATION_SOURCE));
   return list;
 }
 

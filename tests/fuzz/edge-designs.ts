@@ -28,6 +28,8 @@ function noAttachments(o: Obj): Obj {
 }
 function noArms(o: Obj): Obj {
   delete at(o, 'structure').arms;
+  const truck = ((at(o, 'loads').fatigue as Obj | undefined)?.truckGust ?? undefined) as Obj | undefined;
+  if (truck && typeof truck === 'object') delete truck.lanes; // lanes name arms
   return noAttachments(o);
 }
 function sixteenSided(o: Obj): Obj {

@@ -118,7 +118,7 @@ describe('defaults and assumptions', () => {
 
   it('default combinations are labelled and gain an ice combination only with ice', () => {
     const sign = loadDesignFile('examples/cantilever-sign.yaml').design;
-    expect(sign.combinations.map((c) => c.id)).toEqual(['strength-dead', 'extreme-wind-max', 'extreme-wind-min', 'service-wind', 'extreme-ice']);
+    expect(sign.combinations.map((c) => c.id)).toEqual(['strength-dead', 'extreme-wind-max', 'extreme-wind-min', 'service-wind', 'extreme-ice', 'service-dead']);
     for (const c of sign.combinations) expect(c.source).toMatch(/^default, verify against the governing code/);
     expect(sign.combinations[1].factors).toEqual({ dead: 1.1, wind: 1.0 });
     expect(sign.combinations[4].factors).toEqual({ dead: 1.1, ice: 1.0, 'ice-wind': 1.0 });

@@ -61,7 +61,7 @@ describe('buildDocument', () => {
     FIXTURE_DESIGN.assumptions.forEach((a, i) => {
       const row = table.rows[i];
       expect(row[0]).toContain(a.label);
-      expect(row[0]).toContain(a.key);
+      expect(row[0]!.replace(/\u200b/g, '')).toContain(a.key); // the key may break after its dots (zero-width spaces)
       expect(row[2]).toBe(a.defaulted ? 'default' : 'given');
       expect(row[3]).toBe(a.source);
     });
@@ -86,8 +86,8 @@ describe('buildDocument', () => {
           const dimensionless = /dimensionless|^(STR|EXW|EXI|SVC)-\d/.test(label) || /^[LH]\/\d+$/.test(row[1] ?? '');
           for (const cell of row.slice(1)) {
             if (!/\d/.test(cell) || dimensionless) continue;
-            // Ids such as "S1" and "A1" are names, not numbers.
-            if (/^[A-Z]+\d+$/.test(cell) || /arm A\d/.test(cell) || /EXIT \d+/.test(cell) || /^\d+-sided/.test(cell)) continue;
+            // Ids such as "S1" and "A1" and steel grades are names, not numbers.
+            if (/^[A-Z]+\d+$/.test(cell) || /arm A\d/.test(cell) || /EXIT \d+/.test(cell) || /^\d+-sided/.test(cell) || /^ASTM F\d+ Grade \d+$/.test(cell)) continue;
             expect(cell, `${t.title}: ${label}`).toMatch(unit);
           }
         }

@@ -100,9 +100,12 @@ export function criteriaSection(loaded: LoadedDesign): DocSection {
     title: ASSUMPTIONS_TABLE_TITLE,
     header: ['Item (input key)', 'Value', 'Basis', 'Source'],
     widths: ['*', 66, 40, '*'],
-    rows: design.assumptions.map((x) => [`${x.label}\n(${x.key})`, assumptionValue(x, d), x.defaulted ? 'default' : 'given', x.source]),
+    rows: design.assumptions.map((x) => [`${x.label}\n(${breakableKey(x.key)})`, assumptionValue(x, d), x.defaulted ? 'default' : 'given', x.source]),
     note: '"given": taken from the input file. "default": not in the input; the program took the value shown, for the reason in the Source column.',
   });
 
   return { id: 'criteria', title: CRITERIA_TITLE, blocks };
 }
+
+/** A long input key may break after its dots (a zero-width space), so it cannot widen the table past the margin. */
+const breakableKey = (key: string): string => key.replace(/\./g, '.\u200b');
