@@ -1,7 +1,8 @@
 // A few lines for the terminal after `polebook build`: what was analysed and the governing values.
 import type { Design } from './design/design.ts';
 import type { DesignAnalysis } from './analyse-design.ts';
-import { envelope } from './analysis/envelope.ts';
+import { envelope, resultsOf } from './analysis/envelope.ts';
+import { isFactored } from './design/combination-use.ts';
 import { formatQuantity, formatNumber } from './units/units.ts';
 
 export function analysisSummaryLines(design: Design, a: DesignAnalysis): string[] {
@@ -10,8 +11,11 @@ export function analysisSummaryLines(design: Design, a: DesignAnalysis): string[
   const lines = [
     `${design.project.structureId}: ${a.model.nodes.length} nodes, ${a.model.elements.length} elements, ${a.cases.length} load cases, ${results.length} combinations, ${a.options.secondOrder ? 'second order (P-delta)' : 'first order'}`,
   ];
-  const base = envelope(a.results, 'pole', 'Mres');
-  lines.push(`  largest pole moment ${q(base.max.value, 'moment')} at ${q(base.max.s_m, 'length')} under ${base.max.combination}`);
+  const factored = a.combinations.filter((c) => isFactored(c.category)).map((c) => c.id);
+  if (factored.length > 0) {
+    const base = envelope(resultsOf(a.results, factored), 'pole', 'Mres');
+    lines.push(`  largest pole moment (factored) ${q(base.max.value, 'moment')} at ${q(base.max.s_m, 'length')} under ${base.max.combination}`);
+  }
   const amplified = results.filter((r) => r.baseMoment?.amplification != null);
   if (a.options.secondOrder && amplified.length > 0) {
     const worst = amplified.reduce((x, y) => ((y.baseMoment!.amplification ?? 0) > (x.baseMoment!.amplification ?? 0) ? y : x));

@@ -39,7 +39,7 @@ export async function buildPackage(file: string, opts: BuildOptions = {}): Promi
   const loaded = loadDesignFile(file, { SOURCE_DATE_EPOCH: opts.env?.SOURCE_DATE_EPOCH });
   const analysis = analyseDesign(loaded.design, { firstOrder: opts.firstOrder });
   const checks = runChecks(loaded.design, analysis);
-  const document = buildDocument(loaded, { sections: [...analysisSections(loaded, analysis), ...checkSections(loaded, analysis, checks)] });
+  const document = buildDocument(loaded, { sections: [...analysisSections(loaded, analysis), ...checkSections(loaded, analysis, checks)], secondOrder: analysis.options.secondOrder, checks });
   const pdf = await renderPdf(document);
   const json = opts.json
     ? resultsJson({ loaded, toolVersion: toolVersion(), ...analysis, secondOrder: analysis.options.secondOrder, checks })

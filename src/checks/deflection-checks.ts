@@ -13,7 +13,7 @@ import { isDeadOnly } from '../input/combinations.ts';
 import { GALLOPING_CASE_ID, TRUCK_GUST_CASE_ID } from '../loads/fatigue-load.ts';
 import type { CheckRecord } from './check-types.ts';
 import { makeRecord, type CheckedRecords } from './check-record.ts';
-import { isService } from './combination-use.ts';
+import { isService } from '../design/combination-use.ts';
 
 const tipOf = (stations: readonly Station[]): Station => stations.reduce((a, b) => (b.s_m >= a.s_m ? b : a));
 const limitSource = (key: string) => `limit from criteria.deflection.${key} (input or the labelled default printed in the criteria section)`;

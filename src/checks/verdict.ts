@@ -27,6 +27,22 @@ export const CHECK_TITLES: Readonly<Record<CheckType, string>> = {
   vortex: 'Vortex shedding susceptibility',
 };
 
+/** What each check covers, for the scope of the package. */
+export const CHECK_SCOPE: Readonly<Record<CheckType, string>> = {
+  'member-strength': 'at every result station of the pole and of each arm, under every factored combination, on the section of the tapered tube at that station',
+  'member-wall': 'the wall slenderness of the pole and of each arm against the range of the specification, at the root and the tip',
+  'deflection-dead': 'the arm tips, vertical, under the unfactored dead load alone, including the movement of the pole',
+  'deflection-service': 'the pole top under every service combination, and each arm tip without the movement it has with the pole',
+  'deflection-fatigue': 'the arm tips, vertical, under the galloping and truck-gust fatigue loads',
+  'bolt-tension': 'the most loaded anchor bolt on the elastic bolt circle, every factored combination',
+  'bolt-shear': 'base shear and torque shared by the anchor bolts, every factored combination',
+  'bolt-combined': 'the anchor bolt with the largest tension together with its shear, every factored combination',
+  'bolt-bending': 'anchor-bolt bending over the stand-off below the leveling nut, when it is more than one bolt diameter',
+  'base-plate': 'plate bending at the pole face from the largest bolt force, by an effective width per bolt',
+  fatigue: 'stress ranges at the pole base, at each arm root and in the anchor bolts under each fatigue load case, against the constant-amplitude thresholds of the details',
+  vortex: 'critical vortex-shedding speed of each member in its natural modes against the susceptibility threshold (a warning: vortex-shedding loads are not computed)',
+};
+
 /** Types in the order the verdict prints them. */
 export const CHECK_ORDER: readonly CheckType[] = Object.keys(CHECK_TITLES) as CheckType[];
 

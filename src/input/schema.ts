@@ -172,7 +172,7 @@ export function buildInputSchema(system: UnitSystem) {
         date: isoDate('Date of the package, yyyy-mm-dd. Default: SOURCE_DATE_EPOCH, else the newest revision date').optional(),
       }),
       structure: z.strictObject({
-        kind: z.enum(STRUCTURE_KIND_VALUES).meta({ description: 'cantilever-sign | luminaire-pole | signal-support (sets defaults only)' }),
+        kind: z.enum(STRUCTURE_KIND_VALUES).meta({ description: 'cantilever-sign | luminaire-pole | signal-support. Sets the defaults of the pole-top deflection limit, of which fatigue loads apply (galloping and truck gust for signs and signals) and of the fatigue importance factors; the default combinations are the same for every kind' }),
         description: text('One line describing the structure').optional(),
         material: z
           .strictObject({

@@ -46,6 +46,8 @@ export interface DocumentMeta {
   readonly inputHash: string;
   readonly inputFile: string;
   readonly toolVersion: string;
+  /** 'P-delta' or 'first order': how the analysis was made, part of the package identity (footer). */
+  readonly analysisOrder: string;
   /** The user's unit system: quantities in calculation steps print in it; it also picks the page size. */
   readonly units: UnitSystem;
 }

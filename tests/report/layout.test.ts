@@ -18,6 +18,7 @@ const META: DocumentModel['meta'] = {
   inputHash: '0123456789ab',
   inputFile: 'layout.yaml',
   toolVersion: '0.0.0',
+  analysisOrder: 'P-delta',
   units: 'si',
 };
 

@@ -1,6 +1,6 @@
 // Header and footer. Every page, the cover included, carries in its footer the structure,
-// the revision, "page N of M" and the short input hash, so a loose printed page can be
-// matched to the input that made it.
+// the revision, "page N of M", the short input hash and the analysis order (P-delta or first
+// order), so a loose printed page can be matched to the input and the run that made it.
 import type { Content } from 'pdfmake/interfaces.js';
 import type { DocumentMeta } from '../document.ts';
 import { COLOR, PAGE_MARGINS } from './theme.ts';
@@ -21,7 +21,7 @@ export function footerFor(meta: DocumentMeta) {
         style: 'frame',
         columns: [
           { width: '*', text: `${meta.structureId} · Rev. ${meta.revision}` },
-          { width: 'auto', text: `input ${meta.inputHash}` },
+          { width: 'auto', text: `input ${meta.inputHash} · ${meta.analysisOrder}` },
           { width: '*', text: `page ${currentPage} of ${pageCount}`, alignment: 'right' },
         ],
       },

@@ -37,7 +37,7 @@ export function documentDefinition(doc: DocumentModel): TDocumentDefinitions {
       title: `Calculation package ${meta.structureId}, revision ${meta.revision}`,
       author: meta.owner,
       subject: `${meta.projectName}; input ${meta.inputFile}; input SHA-256 ${meta.inputHash}`,
-      keywords: `input-hash ${meta.inputHash}; structure ${meta.structureId}; revision ${meta.revision}`,
+      keywords: `input-hash ${meta.inputHash}; structure ${meta.structureId}; revision ${meta.revision}; analysis ${meta.analysisOrder}`,
       creator: `polebook ${meta.toolVersion}`,
       producer: `polebook ${meta.toolVersion} with pdfmake`,
       creationDate: date,

@@ -5,6 +5,8 @@ import type { DocSection, DocumentModel } from '../document.ts';
 import { coverBlocks } from './cover-blocks.ts';
 import { criteriaSection } from './criteria-section.ts';
 import { documentMeta } from './document-meta.ts';
+import { cleanRoundOff } from './round-off.ts';
+import type { CheckResults } from '../../checks/check-types.ts';
 import { geometrySection } from './geometry-section.ts';
 import { inputEchoSection } from './input-echo-section.ts';
 import { loadsSection } from './loads-section.ts';
@@ -13,12 +15,17 @@ import { scopeSection, SCOPE_TITLE } from './scope-section.ts';
 export interface ExtraSections {
   /** Sections from later stages, in print order; those marked `appendix` follow the input echo. */
   readonly sections?: readonly DocSection[];
+  /** Whether the analysis of this package is second order (P-delta); default: what the input asks. */
+  readonly secondOrder?: boolean;
+  /** The design checks, for the scope's list of what is checked; null: none were made. */
+  readonly checks?: CheckResults | null;
 }
 
 export function buildDocument(loaded: LoadedDesign, extra: ExtraSections = {}): DocumentModel {
   const added = extra.sections ?? [];
+  const secondOrder = extra.secondOrder ?? loaded.design.analysis.secondOrder;
   const body: DocSection[] = [
-    criteriaSection(loaded),
+    criteriaSection(loaded, secondOrder),
     geometrySection(loaded),
     loadsSection(loaded),
     ...added.filter((s) => s.appendix !== true),
@@ -27,6 +34,6 @@ export function buildDocument(loaded: LoadedDesign, extra: ExtraSections = {}): 
   ];
   // The scope lists every section, itself included, so it is built last and printed first.
   const placeholder: DocSection = { id: 'scope', title: SCOPE_TITLE, blocks: [] };
-  const sections = [scopeSection(loaded, [placeholder, ...body]), ...body];
-  return { meta: documentMeta(loaded), cover: coverBlocks(loaded), sections };
+  const sections = [scopeSection(loaded, [placeholder, ...body], extra.checks ?? null), ...body];
+  return { meta: documentMeta(loaded, secondOrder), cover: coverBlocks(loaded), sections: cleanRoundOff(sections) };
 }

@@ -11,7 +11,7 @@ export const ASSUMPTIONS_TABLE_TITLE = 'Assumptions and defaults';
 
 const ITEM_VALUE = ['Item', 'Value'] as const;
 
-export function criteriaSection(loaded: LoadedDesign): DocSection {
+export function criteriaSection(loaded: LoadedDesign, secondOrder: boolean): DocSection {
   const { design } = loaded;
   const d = display(design.units);
   const m = design.material;
@@ -88,7 +88,7 @@ export function criteriaSection(loaded: LoadedDesign): DocSection {
     widths: ['*', 150],
     rows: [
       ['Prismatic segments per tapered member', `${a.segmentsPerMember} segments`],
-      ['Second-order (P-delta) analysis', a.secondOrder ? 'yes' : 'no (first order only)'],
+      ['Second-order (P-delta) analysis', secondOrder ? 'yes' : a.secondOrder ? 'no: first order only, by the --first-order option of the command (the input asks for P-delta)' : 'no: first order only (analysis.secondOrder: false)'],
       ['P-delta convergence tolerance (relative, dimensionless)', formatNumber(a.pDeltaTolerance)],
       ['P-delta iteration cap', `${a.pDeltaMaxIterations} iterations`],
       ['Regular spacing of result stations', d.q(a.stationSpacing_m, 'length')],

@@ -7,7 +7,7 @@ import { KIND_LABEL } from './display.ts';
 
 export const PACKAGE_STATUS = 'DRAFT FOR REVIEW';
 
-export function documentMeta(loaded: LoadedDesign): DocumentMeta {
+export function documentMeta(loaded: LoadedDesign, secondOrder: boolean): DocumentMeta {
   const { project, kind, units } = loaded.design;
   // The latest revision is the last one listed.
   const latest = project.revisions.at(-1);
@@ -25,6 +25,7 @@ export function documentMeta(loaded: LoadedDesign): DocumentMeta {
     // The file name only: the folder it was read from must not change the package bytes.
     inputFile: basename(loaded.file),
     toolVersion: toolVersion(),
+    analysisOrder: secondOrder ? 'P-delta' : 'first order',
     units,
   };
 }

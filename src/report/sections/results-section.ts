@@ -3,13 +3,13 @@
 // and service), the statics check, the envelopes per member and the natural modes.
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { CombinationResult, EnvelopeComponent } from '../../analysis/analysis-types.ts';
-import { envelope } from '../../analysis/envelope.ts';
+import { envelope, extremeExtent, resultsOf } from '../../analysis/envelope.ts';
 import type { LoadedDesign } from '../../design/design.ts';
 import type { Combination } from '../../loads/load-types.ts';
 import type { FrameModel, Vec3 } from '../../model/frame.ts';
 import { formatNumber } from '../../units/units.ts';
 import type { Block, DocSection } from '../document.ts';
-import { isFactored } from '../../checks/combination-use.ts';
+import { isFactored } from '../../design/combination-use.ts';
 import { display, memberText, type Display } from './display.ts';
 import { templateBlocks } from './templates.ts';
 import { vecText } from './vector-text.ts';
@@ -86,7 +86,7 @@ function displacementBlocks(loaded: LoadedDesign, analysis: DesignAnalysis, d: D
         const h = (n: number) => d.q(Math.hypot(u[n][0], u[n][1]), 'section');
         return [c.id, h(poleTop), ...arms.flatMap((a) => [d.q(u[a.node][2], 'section'), h(a.node)])];
       }),
-      note: 'Horizontal: resultant of the X and Y translations. Vertical: Z translation, positive up. The deflection checks against the limits use the service combinations.',
+      note: 'Horizontal: resultant of the X and Y translations. Vertical: Z translation, positive up, of the member axis, including the movement of the pole. The deflection checks of section "Design checks" read these: the arm tips vertical under the dead-alone service combination, the pole top horizontal under the service combinations (the arm tips horizontal without the movement they have with the pole), the arm tips vertical under the galloping and truck-gust fatigue loads.',
     },
   ];
 }
@@ -224,31 +224,81 @@ const ENVELOPE_ROWS: readonly { c: EnvelopeComponent; which: 'max' | 'min'; labe
 ];
 
 function envelopeBlocks(analysis: DesignAnalysis, d: Display): Block[] {
+  const factored = analysis.combinations.filter((c) => isFactored(c.category)).map((c) => c.id);
+  if (factored.length === 0) return [];
+  const results = resultsOf(analysis.results, factored);
   const rows: string[][] = [];
   for (const m of analysis.model.members) {
-    const envs = ENVELOPE_ROWS.map((e) => ({ e, env: envelope(analysis.results, m.id, e.c)[e.which] }));
+    const envs = ENVELOPE_ROWS.map((e) => ({ e, env: envelope(results, m.id, e.c)[e.which] }));
     // the member's largest force and moment: the scale of round-off for its other values
     const scaleOf = (dim: 'moment' | 'force') => Math.max(...envs.filter((x) => x.e.dim === dim).map((x) => Math.abs(x.env.value)));
     for (const { e, env } of envs) {
       const value = withoutRoundOff(env.value, scaleOf(e.dim));
-      const place = m.kind === 'pole' ? `${d.q(env.s_m, 'length')} above base` : `${d.q(env.s_m, 'length')} from pole face`;
-      rows.push(value === 0 ? [memberText(m.id), e.label, d.q(0, e.dim), '– (none)', '–'] : [memberText(m.id), e.label, d.q(value, e.dim), env.combination, place]);
+      if (value === 0) {
+        rows.push([memberText(m.id), e.label, d.q(0, e.dim), '– (none)', '–']);
+        continue;
+      }
+      const stations = results[env.combination]!.members[m.id]!.stations;
+      const span = extremeExtent(stations, e.c, env, CONSTANT_SHARE * scaleOf(e.dim));
+      const from = m.kind === 'pole' ? 'above base' : 'from pole face';
+      const place = span.to_m - span.from_m > 1e-9 * m.length_m ? `${d.q(span.from_m, 'length')} to ${d.q(span.to_m, 'length')} ${from}` : `${d.q(env.s_m, 'length')} ${from}`;
+      rows.push([memberText(m.id), e.label, d.q(value, e.dim), env.combination, place]);
     }
   }
   return [
     { kind: 'heading', level: 2, text: 'Envelopes of internal forces' },
-    { kind: 'paragraph', text: 'For each member, the governing internal forces over all combinations, with the combination and the place that give them.' },
+    { kind: 'paragraph', text: 'For each member, the governing internal forces over the factored combinations (strength, extreme wind, extreme wind with ice), with the combination and the place that give them. Service and fatigue combinations are not in these envelopes.' },
     {
       kind: 'table',
-      title: 'Governing internal forces per member, over all combinations',
+      title: 'Governing internal forces per member, factored combinations',
       header: ['Member', 'Quantity', 'Value', 'Combination', 'Place'],
       widths: [44, '*', 62, 118, 82],
       rows,
       note:
-        'Member axes and signs as in the section "Structural model" (N > 0 tension). Extremes are exact along each element. Service combinations are included; strength checks use the factored ones. ' +
+        'Member axes and signs as in the section "Structural model" (N > 0 tension). Extremes are exact along each element. ' +
+        `Where the value holds over a length (within ${CONSTANT_SHARE} of the member's largest value of its kind), the place is that length. ` +
         `A value within ${ROUND_OFF} of the member's largest force or moment is round-off and printed as 0, with no combination named.`,
     },
   ];
+}
+
+/** Values within this share of the member's largest of their kind count as the same value (a constant run). */
+const CONSTANT_SHARE = 1e-6;
+
+function foundationBlocks(analysis: DesignAnalysis, d: Display): Block[] {
+  const node = analysis.model.supports[0]!.node;
+  const groups = [
+    { title: 'Foundation design envelope, factored combinations', list: analysis.combinations.filter((c) => isFactored(c.category)) },
+    { title: 'Foundation design envelope, service combinations (unfactored)', list: analysis.combinations.filter((c) => c.category === 'service') },
+  ];
+  const blocks: Block[] = [];
+  for (const g of groups) {
+    if (g.list.length === 0) continue;
+    const rows = g.list.map((c) => {
+      const f = resultOf(analysis, c).reactions.find((x) => x.node === node)!.force;
+      return { id: c.id, M: Math.hypot(f[3], f[4]), V: Math.hypot(f[0], f[1]), P: f[2], T: Math.abs(f[5]) };
+    });
+    const most = (key: 'M' | 'V' | 'P' | 'T', sign = 1) => rows.reduce((a, b) => (sign * b[key] > sign * a[key] ? b : a));
+    const line = (label: string, key: 'M' | 'V' | 'P' | 'T', dim: 'moment' | 'force', sign = 1) => {
+      const r = most(key, sign);
+      return [label, d.q(r[key], dim), r.id];
+    };
+    blocks.push({
+      kind: 'table',
+      title: g.title,
+      header: ['Quantity at the top of the foundation', 'Value', 'Combination'],
+      widths: ['*', 90, 140],
+      rows: [
+        line('Largest overturning moment M = √(Mx² + My²)', 'M', 'moment'),
+        line('Largest horizontal shear V = √(Fx² + Fy²)', 'V', 'force'),
+        line('Largest vertical reaction Fz (up on the pole, down on the foundation)', 'P', 'force'),
+        line('Smallest vertical reaction Fz (negative: uplift)', 'P', 'force', -1),
+        line('Largest torque T = |Mz|', 'T', 'moment'),
+      ],
+      note: 'From the reactions at the pole base (by the support on the structure; the foundation receives them with opposite signs). Each value with the combination that gives it; they need not occur together, and the combination rows above give the values that do.',
+    });
+  }
+  return blocks;
 }
 
 function modeBlocks(analysis: DesignAnalysis, d: Display): Block[] {
@@ -282,6 +332,7 @@ export function resultsSection(loaded: LoadedDesign, analysis: DesignAnalysis): 
       ...summaryBlocks(analysis, d),
       ...displacementBlocks(loaded, analysis, d),
       ...reactionBlocks(analysis, d),
+      ...foundationBlocks(analysis, d),
       ...staticsBlocks(analysis, d),
       ...envelopeBlocks(analysis, d),
       ...modeBlocks(analysis, d),

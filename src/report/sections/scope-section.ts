@@ -5,11 +5,15 @@ import { KIND_LABEL } from './display.ts';
 import { templateBlocks } from './templates.ts';
 import { labelSections } from '../section-labels.ts';
 import { INPUT_ECHO_ID } from './input-echo-section.ts';
+import type { CheckResults } from '../../checks/check-types.ts';
+import { CHECK_ORDER, CHECK_SCOPE, CHECK_TITLES, verdictByType } from '../../checks/verdict.ts';
+import type { CheckType } from '../../checks/check-types.ts';
+import { readTemplate } from './templates.ts';
 
 export const SCOPE_TITLE = 'Scope and cautions';
 
 /** `contents` is every section of the package in print order, this one included. */
-export function scopeSection(loaded: LoadedDesign, contents: readonly DocSection[]): DocSection {
+export function scopeSection(loaded: LoadedDesign, contents: readonly DocSection[], checks: CheckResults | null): DocSection {
   const { design } = loaded;
   const p = design.project;
   const labelled = labelSections(contents);
@@ -23,9 +27,31 @@ export function scopeSection(loaded: LoadedDesign, contents: readonly DocSection
     unitSystem: design.units === 'us' ? 'US customary' : 'SI',
     echoAppendix: echo ? echo.name : 'the input file',
     sectionList,
+    checksMade: checksMade(checks),
+    checksNotMade: checksNotMade(loaded, checks),
     assumptionsTable: '"Assumptions and defaults" of section "Design criteria and assumptions"',
     revision: loaded.design.project.revisions.at(-1)?.id ?? 'none given',
     inputHash: loaded.inputHash,
   });
   return { id: 'scope', title: SCOPE_TITLE, blocks: t.blocks };
+}
+
+function checksMade(checks: CheckResults | null): string {
+  if (checks === null || checks.records.length === 0) return 'None: no design check was made for this document.';
+  return verdictByType(checks.records)
+    .map((v) => `- ${v.title}: ${CHECK_SCOPE[v.type]}.${v.failures > 0 && v.worst.ratio === Infinity ? ' It could not be made in full (see its reason in the checks section) and is reported as failed.' : ''}`)
+    .join('\n');
+}
+
+/** The standing list (templates/scope-not-checked.md), then every check type this package does not make. */
+function checksNotMade(loaded: LoadedDesign, checks: CheckResults | null): string {
+  const made = new Set((checks?.records ?? []).map((r) => r.type));
+  const why: Partial<Record<CheckType, string>> = {
+    fatigue: loaded.design.fatigue === null ? 'no fatigue loads are given (loads.fatigue)' : 'not made in this package',
+    'deflection-fatigue': loaded.design.fatigue === null ? 'no fatigue loads are given' : 'no galloping or truck-gust load applies to this structure',
+    'deflection-dead': 'there is no arm',
+    'bolt-bending': 'the stand-off below the leveling nut is at most one bolt diameter, so the bolts are not taken to bend',
+  };
+  const absent = CHECK_ORDER.filter((t) => !made.has(t)).map((t) => `- ${CHECK_TITLES[t]}: not checked${why[t] ? ` (${why[t]})` : ''}.`);
+  return [readTemplate('scope-not-checked').trim(), ...absent].join('\n');
 }
