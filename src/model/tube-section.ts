@@ -22,6 +22,10 @@ export interface TubeProperties {
   readonly c_m: number;
   /** Elastic section modulus I / c. */
   readonly S_m3: number;
+  /** Plastic section modulus (for a multisided tube, the smaller of bending toward a flat and toward a corner). */
+  readonly Z_m3: number;
+  /** Radius of gyration √(I/A). */
+  readonly r_m: number;
   /** Shear area for transverse shear in either direction. */
   readonly shearArea_m2: number;
   /** Outside perimeter (surface area per length, for ice). */
@@ -55,9 +59,13 @@ export function roundTube(D_m: number, t_m: number): TubeProperties {
   c.add({ description: 'Extreme fibre distance', symbol: 'c', formula: 'c = D/2', substituted: [qty(D_m, 'section'), ' / 2'], result: qty(cm, 'section'), source: src });
   const S = I / cm;
   c.add({ description: 'Section modulus', symbol: 'S', formula: 'S = 2I/D', substituted: ['2 × ', qty(I, 'inertia'), ' / ', qty(D_m, 'section')], result: qty(S, 'modulus'), source: src });
+  const Z = (D_m ** 3 - d ** 3) / 6;
+  c.add({ description: 'Plastic section modulus', symbol: 'Z', formula: 'Z = (D³ − d³) / 6', substituted: ['((', qty(D_m, 'section'), ')³ − (', qty(d, 'section'), ')³) / 6'], result: qty(Z, 'modulus'), source: src });
+  const r = Math.sqrt(I / A);
+  c.add({ description: 'Radius of gyration', symbol: 'r', formula: 'r = √(I / A)', substituted: ['√(', qty(I, 'inertia'), ' / ', qty(A, 'sectionArea'), ')'], result: qty(r, 'section'), source: 'definition' });
   const Av = A / 2;
   c.add({ description: 'Shear area', symbol: 'Av', formula: 'Av = A/2', substituted: [qty(A, 'sectionArea'), ' / 2'], result: qty(Av, 'sectionArea'), source: SHEAR_AREA_SOURCE });
-  return { shape: 'round', sides: null, D_m, t_m, A_m2: A, I_m4: I, J_m4: J, c_m: cm, S_m3: S, shearArea_m2: Av, perimeter_m: Math.PI * D_m, steps: c.steps };
+  return { shape: 'round', sides: null, D_m, t_m, A_m2: A, I_m4: I, J_m4: J, c_m: cm, S_m3: S, Z_m3: Z, r_m: r, shearArea_m2: Av, perimeter_m: Math.PI * D_m, steps: c.steps };
 }
 
 /** Regular n-sided tube, D across the flats outside, thin-walled formulas on the mid-wall line. */
@@ -82,9 +90,34 @@ export function multisidedTube(sides: number, D_m: number, t_m: number): TubePro
   c.add({ description: 'Extreme fibre distance (outside corner)', symbol: 'c', formula: 'c = (D/2) / cos(π/n)', substituted: ['(', qty(D_m, 'section'), `/2) / cos(π/${n})`], result: qty(cm, 'section'), source: 'geometry of the regular polygon' });
   const S = I / cm;
   c.add({ description: 'Section modulus at the corner', symbol: 'S', formula: 'S = I / c', substituted: [qty(I, 'inertia'), ' / ', qty(cm, 'section')], result: qty(S, 'modulus'), source: 'definition' });
+  const Z = Math.min(polygonPlasticModulus(n, Dm, t_m, 0), polygonPlasticModulus(n, Dm, t_m, Math.PI / n));
+  c.add({ description: 'Plastic section modulus (smaller of bending toward a flat and toward a corner)', symbol: 'Z', formula: 'Z = Σ t ∫ |y| ds over the n flats on the mid-wall line', substituted: [`${n} flats of `, qty(b, 'section'), ' × ', qty(t_m, 'section'), ' at Dm = ', qty(Dm, 'section')], result: qty(Z, 'modulus'), source: src });
+  const r = Math.sqrt(I / A);
+  c.add({ description: 'Radius of gyration', symbol: 'r', formula: 'r = √(I / A)', substituted: ['√(', qty(I, 'inertia'), ' / ', qty(A, 'sectionArea'), ')'], result: qty(r, 'section'), source: 'definition' });
   const Av = A / 2;
   c.add({ description: 'Shear area', symbol: 'Av', formula: 'Av = A/2', substituted: [qty(A, 'sectionArea'), ' / 2'], result: qty(Av, 'sectionArea'), source: SHEAR_AREA_SOURCE });
-  return { shape: 'multisided', sides: n, D_m, t_m, A_m2: A, I_m4: I, J_m4: J, c_m: cm, S_m3: S, shearArea_m2: Av, perimeter_m: n * D_m * tanPn, steps: c.steps };
+  return { shape: 'multisided', sides: n, D_m, t_m, A_m2: A, I_m4: I, J_m4: J, c_m: cm, S_m3: S, Z_m3: Z, r_m: r, shearArea_m2: Av, perimeter_m: n * D_m * tanPn, steps: c.steps };
+}
+
+/**
+ * Plastic modulus of a thin regular polygon (mid-wall flat-to-flat Dm, wall t) about a
+ * centroidal axis: t × Σ ∫|y| ds along each flat, y measured from the axis. rot = 0 puts the
+ * axis parallel to a pair of flats; rot = π/n through a pair of corners.
+ */
+export function polygonPlasticModulus(n: number, Dm_m: number, t_m: number, rot: number): number {
+  const R = Dm_m / 2 / Math.cos(Math.PI / n);
+  let sum = 0;
+  for (let k = 0; k < n; k++) {
+    const a1 = rot + Math.PI / n + (2 * Math.PI * k) / n;
+    const a2 = a1 + (2 * Math.PI) / n;
+    const y1 = R * Math.sin(a1);
+    const y2 = R * Math.sin(a2);
+    const len = Math.hypot(R * Math.cos(a2) - R * Math.cos(a1), y2 - y1);
+    // ∫|y| ds of a straight flat with y linear from y1 to y2.
+    const absInt = y1 * y2 >= 0 ? (Math.abs(y1 + y2) / 2) * len : ((y1 * y1 + y2 * y2) / (2 * Math.abs(y2 - y1))) * len;
+    sum += absInt;
+  }
+  return t_m * sum;
 }
 
 /** Properties of a round or multisided tube of outside diameter D (across flats) and wall t. */
