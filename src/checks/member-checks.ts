@@ -66,7 +66,9 @@ export function memberChecks(design: Design, analysis: DesignAnalysis): CheckedR
         if (r.invalidReason) {
           if (cannotRecorded) continue;
           cannotRecorded = true;
-          out.records.push(makeRecord({ type: 'member-strength', label: 'Combined forces (H3-6): cannot be made', member, s_m: st.s_m, combination: null, demand: qty(NaN, 'ratio'), capacity: qty(1, 'ratio'), equation: INTERACTION_EQUATION, cannot: r.invalidReason }));
+          // The wall's slenderness and the method's limit are the finite numbers this record can show.
+          const w = wallSlenderness(p, steel);
+          out.records.push(makeRecord({ type: 'member-strength', label: `Combined forces (H3-6): cannot be made, ${w.name} beyond the method's limit`, member, s_m: st.s_m, combination: null, demand: qty(w.lambda, 'ratio'), capacity: qty(w.limit, 'ratio'), equation: INTERACTION_EQUATION, cannot: r.invalidReason }));
           continue;
         }
         const d = demandAt(st);
@@ -110,6 +112,14 @@ function memberSteps(member: string, comb: string, st: Station, p: TubePropertie
   return [...c.steps];
 }
 
+/** The wall slenderness of a section (D/t round, b/t of a flat) and the limit of the method. */
+function wallSlenderness(p: ReturnType<typeof memberSectionAt>, steel: Steel): { name: string; lambda: number; limit: number } {
+  const round = p.shape === 'round';
+  return round
+    ? { name: 'D/t', lambda: p.D_m / p.t_m, limit: (ROUND_LIMITS.applicability * steel.E_Pa) / steel.Fy_Pa }
+    : { name: 'b/t', lambda: flatGeometry(p).bOverT, limit: flatApplicability(steel) };
+}
+
 /** D/t (round) or b/t (multisided) at the member's largest diameter against the limit of the method. */
 function wallCheck(design: Design, member: string, length_m: number, steel: Steel, out: CheckedRecords): void {
   const p0 = memberSectionAt(design, member, 0);
@@ -117,8 +127,7 @@ function wallCheck(design: Design, member: string, length_m: number, steel: Stee
   const p = p1.D_m > p0.D_m ? p1 : p0;
   const s_m = p === p1 ? length_m : 0;
   const round = p.shape === 'round';
-  const lambda = round ? p.D_m / p.t_m : flatGeometry(p).bOverT;
-  const limit = round ? (ROUND_LIMITS.applicability * steel.E_Pa) / steel.Fy_Pa : flatApplicability(steel);
+  const { lambda, limit } = wallSlenderness(p, steel);
   const equation = round ? `D/t < 0.45 E/Fy (${AISC}, Sections E7 and F8 scope)` : 'b/t ≤ 2.8 √(E/Fy) (polebook bound of the slender-flat method, twice λr = 1.40 √(E/Fy); verify)';
   const rec = makeRecord({ type: 'member-wall', label: round ? 'Wall slenderness D/t at the largest diameter' : `Flat slenderness b/t at the largest diameter (${p.sides} sides)`, member, s_m, combination: null, demand: qty(lambda, 'ratio'), capacity: qty(limit, 'ratio'), equation });
   const final = rec.status === 'fail' ? { ...rec, reason: `${round ? 'D/t' : 'b/t'} = ${lambda.toFixed(1)} is beyond the limit ${limit.toFixed(1)} of the method: no resistance can be given and the member checks cannot be made` } : rec;
