@@ -12,6 +12,21 @@ export const ARM_LENGTH_USUAL_M = 75 * FT_M;
 /** Sign panels with their bracing weigh a few psf; above this it reads like a whole weight (common practice). */
 export const PANEL_WEIGHT_SUSPECT_PA = 25 * PSF_PA;
 
+/** Tube walls outside these D/t read like a slip of the unit or the field (common practice). */
+export const WALL_DT_PLAUSIBLE = { min: 10, max: 200 } as const;
+
+/** A wall whose diameter-to-thickness ratio, at a diameter the user gave, is outside the usual range. */
+function wallSlip(section: { readonly wall: number; readonly rootDiameter?: number | undefined; readonly tipDiameter?: number | undefined }, what: string): string | undefined {
+  for (const [end, D] of [['root', section.rootDiameter], ['tip', section.tipDiameter]] as const) {
+    if (D === undefined) continue;
+    const dt = D / section.wall;
+    if (dt < WALL_DT_PLAUSIBLE.min || dt > WALL_DT_PLAUSIBLE.max) {
+      return `the ${what} wall gives D/t = ${formatNumber(dt, 3)} at the ${end}, outside the ${WALL_DT_PLAUSIBLE.min}-${WALL_DT_PLAUSIBLE.max} of pole and arm tubes (common practice); check the wall and its unit`;
+    }
+  }
+  return undefined;
+}
+
 /** A design pressure whose number, in the units the user typed, falls where basic wind speeds do. */
 function pressureSlip(p_Pa: number, units: UnitSystem): string | undefined {
   if (units === 'us') {
@@ -49,7 +64,11 @@ export function plausibilityWarnings(input: DesignInput, poleRootDiameter_m: num
       warning(['structure', 'pole', 'height'], `a pole of ${formatQuantity(poleHeight_m, 'length', units)} is taller than polebook's scope of 60 ft (18.3 m), a limit of ours; high-mast poles need checks polebook does not make. Check the value and its unit`),
     );
   }
+  const poleWall = wallSlip(input.structure.pole.section, 'pole');
+  if (poleWall) out.push(warning(['structure', 'pole', 'section', 'wall'], poleWall));
   (input.structure.arms ?? []).forEach((a, i) => {
+    const armWall = wallSlip(a.section, `arm ${a.id}`);
+    if (armWall) out.push(warning(['structure', 'arms', i, 'section', 'wall'], armWall));
     // A drooping arm whose tip ends below the base plate would be in the foundation or the ground.
     const tipHeight_m = a.attachHeight + a.length * Math.sin(a.rise ?? 0);
     if (tipHeight_m < 0) {

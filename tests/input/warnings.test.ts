@@ -1,7 +1,8 @@
 // Implausible magnitudes load with a warning that names the likely slip.
 // Ranges (ours, common practice): design wind pressures are tens of psf (about 0.5-3 kPa) while
 // basic wind speeds are about 90-180 mph (40-80 m/s); sign panels weigh a few psf; polebook's
-// scope is poles up to 60 ft (18.3 m), a limit of ours.
+// scope is poles up to 60 ft (18.3 m), a limit of ours; pole and arm tubes have D/t of about 10-200
+// (common practice).
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { loadDesignText } from '../../src/input/index.ts';
@@ -31,6 +32,21 @@ describe('plausibility warnings', () => {
     expect(w.path).toBe('loads.wind.panels');
     expect(w.message).toContain('basic wind speed in mph');
     expect(text.split('\n')[w.line - 1].slice(w.col - 1)).toMatch(/^115/);
+  });
+
+  it('a wall typed in the wrong unit: 0.05 in on a 24 in pole (D/t 480) is warned at the wall', () => {
+    const text = swap(SIGN, '      wall: 0.5             # in', '      wall: 0.05            # in');
+    const { warnings } = loadDesignText(text, 'sign.yaml', env);
+    expect(warnings.map((w) => w.path)).toEqual(['structure.pole.section.wall']);
+    expect(warnings[0].message).toContain('D/t = 480');
+    expect(text.split('\n')[warnings[0].line - 1].slice(warnings[0].col - 1)).toMatch(/^0\.05/);
+  });
+
+  it('a wall thicker than a tenth of the diameter (D/t 8 on a 16 in arm) is warned at the arm wall', () => {
+    const text = swap(SIGN, '        wall: 0.375         # in (3/8)', '        wall: 2             # in');
+    const { warnings } = loadDesignText(text, 'sign.yaml', env);
+    expect(warnings.map((w) => w.path)).toEqual(['structure.arms[0].section.wall']);
+    expect(warnings[0].message).toContain('D/t = 8 ');
   });
 
   it('a wind speed typed as a pressure (SI): 45 in a kPa field', () => {
