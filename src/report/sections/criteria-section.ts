@@ -55,8 +55,9 @@ export function criteriaSection(loaded: LoadedDesign, secondOrder: boolean): Doc
 
   const bolts = c.anchorBolts;
   if (bolts === null) {
-    blocks.push({ kind: 'paragraph', text: 'No anchor bolts were entered (criteria.anchorBolts): the anchor-bolt checks cannot be made and are reported as failed for that reason.' });
+    blocks.push({ kind: 'paragraph', text: 'No anchor bolts were entered (criteria.anchorBolts). polebook does not yet check anchor bolts or the base plate: the factored base reactions and the foundation design envelope in the results are the forces to check them with, by hand or another tool.' });
   } else {
+    blocks.push({ kind: 'paragraph', text: 'The anchor bolts and base plate below are echoed as entered. polebook does not yet check anchor bolts or the base plate: the factored base reactions and the foundation design envelope in the results are the forces to check them with, by hand or another tool.' });
     blocks.push({
       kind: 'table',
       title: 'Anchor bolts',
@@ -77,7 +78,7 @@ export function criteriaSection(loaded: LoadedDesign, secondOrder: boolean): Doc
   const plate = c.basePlate;
   blocks.push(
     plate === null
-      ? { kind: 'paragraph', text: 'No base plate was entered (criteria.basePlate): the base plate check cannot be made and is reported as failed for that reason.' }
+      ? { kind: 'paragraph', text: 'No base plate was entered (criteria.basePlate); the base plate is not checked by polebook.' }
       : { kind: 'table', title: 'Base plate', header: [...ITEM_VALUE], widths: ['*', 150], rows: [['Plate thickness', d.q(plate.thickness_m, 'section')], ['Plate yield strength, Fy', d.q(plate.Fy_Pa, 'stress')]] },
   );
 
