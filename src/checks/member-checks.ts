@@ -84,7 +84,8 @@ export function memberChecks(design: Design, analysis: DesignAnalysis): CheckedR
 
 function memberSteps(member: string, comb: string, st: Station, p: TubeProperties, steel: Steel, geom: MemberGeometry, phi: Design['criteria']['phi']): CalcStep[] {
   const c = new StepCollector();
-  const where = `${member} at s = ${st.s_m.toFixed(3)} m from its root, ${comb}`;
+  // The station itself is printed, in the user's units, in the heading of the check.
+  const where = `${member} at the governing station, ${comb}`;
   const keep = new Set(['d', 'Dm', 'A', 'I', 'c', 'S', 'Z', 'r']);
   for (const s of p.steps) if (keep.has(s.symbol)) c.add(s);
   const d = demandAt(st);

@@ -13,7 +13,7 @@ export interface Section {
   diameter_m: number;
 }
 
-/** A round steel tube, thin-walled formulas not used: exact annulus (DESIGN.md section 2). */
+/** A round steel tube, thin-walled formulas not used: exact annulus I = π(D⁴ − d⁴)/64 (any mechanics of materials text, e.g. Gere & Goodno). */
 export function roundTube(D_m: number, t_m: number, E_Pa = 200e9, G_Pa = 77e9, density_kgm3 = 7850): Section {
   const d = D_m - 2 * t_m;
   const A = (Math.PI / 4) * (D_m ** 2 - d ** 2);

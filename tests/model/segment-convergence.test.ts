@@ -25,7 +25,8 @@ const w = 500;
 
 // Second moment of the annulus, written here from its definition (exact).
 const Iannulus = (D: number, t: number) => (Math.PI / 64) * (D ** 4 - (D - 2 * t) ** 4);
-// Thin-wall regular polygon (DESIGN.md 2), for the multisided case only: the study is about
+// Thin-wall regular polygon (n flat plates of width Dm tan(π/n), summed by the parallel-axis
+// theorem of any mechanics of materials text, e.g. Gere & Goodno, Mechanics of Materials), for the multisided case only: the study is about
 // the segment count, so the reference uses the same section formula as the model.
 const Ipolygon = (n: number, D: number, t: number) => {
   const Dm = D - t;

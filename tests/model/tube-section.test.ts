@@ -36,7 +36,7 @@ describe('round tube against exact integration of the annulus', () => {
 
 describe('multisided tube against exact integration of the polygon outlines', () => {
   // Exact: the outer polygon (flats at D/2) minus the inner polygon (flats at D/2 - t).
-  // The thin-wall formulas (DESIGN.md 2) neglect each plate's own thickness terms. For a
+  // The thin-wall formulas (n flat plates on the mid-wall line, parallel-axis theorem) neglect each plate's own thickness terms. For a
   // constant wall, n b t equals the exact area (the trapezoids of each side sum to it),
   // and the thin-wall I is smaller than the exact I by the factor 1/(1 + (t/Dm)²) (own
   // derivation from the closed-form second moment of a regular polygon), so the tolerance

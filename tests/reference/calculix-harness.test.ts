@@ -115,8 +115,8 @@ describe('CalculiX deck writer (no ccx needed)', () => {
 
 describe('tree closed form used to check the harness (no ccx needed)', () => {
   it('reproduces the moment-area results for an L-frame with a tip load (sway P a h^2/(2EI), tip drop P a^3/(3EI) + P a^2 h/EI)', () => {
-    // Source: moment-area method for an L-shaped frame (../shared/DESIGN.md section 8 lists these
-    // results). Axial strain is left out of those formulas, so A is made very large here.
+    // Source: the moment-area theorems applied to an L-shaped frame (e.g. Hibbeler, Structural
+    // Analysis, deflections by the moment-area method; the results are derived by hand from them). Axial strain is left out of those formulas, so A is made very large here.
     const stiffAxial: TubeProps = { ...tube(0.3, 0.006), A_m2: 1e6 };
     const h = 7;
     const a = 6;
@@ -220,7 +220,7 @@ describe.skipIf(!ccxPresent)('CalculiX harness against closed forms', () => {
 
   it('stepped (tapered) cantilever of 8 segments: moment-area sum of P/(3EI_k)[(L-a)^3-(L-b)^3] (Mohr)', async () => {
     // Section changes are where ccx ties sections rigidly; with an isotropic material this case
-    // came out stiff (../shared/STACK-NOTES.md); the orthotropic zero-Poisson material fixes it.
+    // came out stiff (measured on this machine); the orthotropic zero-Poisson material fixes it.
     const L = 12;
     const n = 8;
     const tubes = Array.from({ length: n }, (_, k) => tube(0.4 - (0.2 * k) / (n - 1), 0.006));
@@ -255,7 +255,7 @@ describe.skipIf(!ccxPresent)('CalculiX harness against closed forms', () => {
     expect(Math.abs(rot[0])).toBeLessThan(1e-3 * Math.abs(rot[1]));
   });
 
-  it('rotations from probes on the L-frame: joint rotation P a h/(EI) (moment-area, DESIGN.md section 8)', async () => {
+  it('rotations from probes on the L-frame: joint rotation P a h/(EI) (moment-area theorems, e.g. Hibbeler, Structural Analysis)', async () => {
     const t = tube(0.35, 0.008);
     const h = 7;
     const a = 8;

@@ -1,6 +1,6 @@
 // The figures of the analysis sections for every bundled example: each SVG is well-formed
 // (checked by a small XML reader in this folder), keeps to what the PDF renderer draws reliably
-// (no mixed text and tspan, no markers: ../shared/STACK-NOTES.md), names the members and the
+// (no mixed text and tspan, no markers: pdfmake's SVG support, measured on this machine), names the members and the
 // attachments in the structure drawings, and comes out the same on a second build.
 import { readdirSync } from 'node:fs';
 import { join } from 'node:path';

@@ -111,7 +111,8 @@ describe('analysis sections in the package', () => {
   it('second order: base forces of extreme-wind-max@wind-090 equal minus the applied wind and dead loads', () => {
     // Wind toward +Y, square to the pole and the arm (along X) and onto both panel faces:
     // force = pressure × projected area (members: length × mean outside diameter of the
-    // linear taper; panels: width × height), the rule the package states (DESIGN.md §3).
+    // linear taper; panels: width × height), the rule the package states (force = pressure × projected area,
+    // as in the wind-load provisions of AASHTO LRFD-LTS, from memory).
     const pm = 38 * PSF_PA;
     const pp = 42 * PSF_PA;
     const poleArea = pole.H * (pole.Droot - (pole.taper * pole.H) / 2);

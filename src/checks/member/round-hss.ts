@@ -64,12 +64,18 @@ export function roundCompression(p: TubeProperties, steel: Steel, Lc_m: number, 
   return { nominal: Pn, wallClass: lambda > lr ? 'slender' : 'compact', equation: `${AISC}, Eq. E7-1`, valid: true, reason: '' };
 }
 
-export function roundShear(p: TubeProperties, steel: Steel, Lv_m: number, c?: StepCollector): Resistance {
-  const { E_Pa: E, Fy_Pa: Fy } = steel;
+/** Shear (G5-2) and torsion (H3-2) share one form: the larger of a length-dependent and a
+ * length-free buckling stress of the wall, not more than 0.6 Fy. */
+function wallBucklingStress(p: TubeProperties, steel: Steel, L_m: number, kLong: number, kShort: number): { a: number; b: number; Fcr: number } {
   const lambda = p.D_m / p.t_m;
-  const a = (1.6 * E) / (Math.sqrt(Lv_m / p.D_m) * lambda ** 1.25);
-  const b = (0.78 * E) / lambda ** 1.5;
-  const Fcr = Math.min(Math.max(a, b), 0.6 * Fy);
+  const a = (kLong * steel.E_Pa) / (Math.sqrt(L_m / p.D_m) * lambda ** 1.25);
+  const b = (kShort * steel.E_Pa) / lambda ** 1.5;
+  return { a, b, Fcr: Math.min(Math.max(a, b), 0.6 * steel.Fy_Pa) };
+}
+
+export function roundShear(p: TubeProperties, steel: Steel, Lv_m: number, c?: StepCollector): Resistance {
+  const Fy = steel.Fy_Pa;
+  const { a, b, Fcr } = wallBucklingStress(p, steel, Lv_m, 1.6, 0.78);
   c?.add({ description: 'Shear buckling stress, the larger of G5-2a and G5-2b, not more than 0.6 Fy', symbol: 'Fcr,v', formula: 'Fcr = max(1.60 E / (√(Lv/D) (D/t)^1.25), 0.78 E / (D/t)^1.5) ≤ 0.6 Fy', substituted: ['max(', qty(a, 'stress'), ', ', qty(b, 'stress'), ') ≤ ', qty(0.6 * Fy, 'stress'), ' (Lv = ', qty(Lv_m, 'length'), ')'], result: qty(Fcr, 'stress'), source: `${AISC}, Eq. G5-2a, G5-2b` });
   const Vn = (Fcr * p.A_m2) / 2;
   c?.add({ description: 'Nominal shear strength', symbol: 'Vn', formula: 'Vn = Fcr Ag / 2', substituted: [qty(Fcr, 'stress'), ' × ', qty(p.A_m2, 'sectionArea'), ' / 2'], result: qty(Vn, 'force'), source: `${AISC}, Eq. G5-1` });
@@ -77,11 +83,8 @@ export function roundShear(p: TubeProperties, steel: Steel, Lv_m: number, c?: St
 }
 
 export function roundTorsion(p: TubeProperties, steel: Steel, L_m: number, c?: StepCollector): Resistance {
-  const { E_Pa: E, Fy_Pa: Fy } = steel;
-  const lambda = p.D_m / p.t_m;
-  const a = (1.23 * E) / (Math.sqrt(L_m / p.D_m) * lambda ** 1.25);
-  const b = (0.6 * E) / lambda ** 1.5;
-  const Fcr = Math.min(Math.max(a, b), 0.6 * Fy);
+  const Fy = steel.Fy_Pa;
+  const { a, b, Fcr } = wallBucklingStress(p, steel, L_m, 1.23, 0.6);
   c?.add({ description: 'Torsional buckling stress, the larger of H3-2a and H3-2b, not more than 0.6 Fy', symbol: 'Fcr,t', formula: 'Fcr = max(1.23 E / (√(L/D) (D/t)^1.25), 0.60 E / (D/t)^1.5) ≤ 0.6 Fy', substituted: ['max(', qty(a, 'stress'), ', ', qty(b, 'stress'), ') ≤ ', qty(0.6 * Fy, 'stress'), ' (L = ', qty(L_m, 'length'), ')'], result: qty(Fcr, 'stress'), source: `${AISC}, Eq. H3-2a, H3-2b` });
   const C = (Math.PI * (p.D_m - p.t_m) ** 2 * p.t_m) / 2;
   c?.add({ description: 'Torsional constant of a round HSS', symbol: 'C', formula: 'C = π (D − t)² t / 2', substituted: ['π × (', qty(p.D_m, 'section'), ' − ', qty(p.t_m, 'section'), ')² × ', qty(p.t_m, 'section'), ' / 2'], result: qty(C, 'modulus'), source: `${AISC}, Section H3.1 (user note)` });

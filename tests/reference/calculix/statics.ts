@@ -1,6 +1,6 @@
 // Reactions of a frame with exactly one support, by statics (sum of forces and of moments
 // about the support node, first order, undeformed geometry). ccx's own reaction printout
-// (*NODE PRINT RF) at beam supports was measured wrong on this machine (../shared/STACK-NOTES.md;
+// (*NODE PRINT RF) at beam supports was measured wrong on this machine (CalculiX from Debian;
 // a tip-loaded cantilever printed a 2141 N axial reaction for a purely transverse 1000 N load),
 // so reactions for the comparison come from this equilibrium of the loads ccx solved: the
 // concentrated forces written in its deck (element loads lumped onto ccx nodes, moments as

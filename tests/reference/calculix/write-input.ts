@@ -4,7 +4,7 @@
 // - Orthotropic material, all Poisson ratios 0, true shear modulus G, material axis 1 along
 //   each member: with an isotropic material the rigid ties that ccx puts at supports, joints,
 //   section changes and nodal moments stiffen the frame by about 1 % (prismatic cantilever)
-//   to 15 % (segmented taper) (measured on this machine, ../shared/STACK-NOTES.md).
+//   to 15 % (segmented taper) (measured on this machine with CalculiX 2.x from Debian).
 // - The beam normal is given explicitly per element (ccx's default is parallel to a vertical pole).
 // - Rigid offsets become short beams with the same tube and a 1e4 times stiffer material,
 //   checked on offset cantilevers in closed form. (*RIGID BODY on beam nodes was tried and
