@@ -1,12 +1,13 @@
 // Terminal lines after `polebook build`: the worst ratio of each check type and the verdict.
 import type { Design } from '../design/design.ts';
 import { formatQuantity } from '../units/units.ts';
+import { memberName } from '../design/member-names.ts';
 import type { CheckRecord, CheckResults } from './check-types.ts';
 import { verdictByType } from './verdict.ts';
 
 /** Where a record is, in words: "pole at 0 ft", "arm A1 at 36 ft", "anchor bolts". */
 export function placeText(r: CheckRecord, design: Design): string {
-  const who = r.member === 'pole' ? 'pole' : r.member === 'anchor-bolts' ? 'anchor bolts' : r.member === 'base-plate' ? 'base plate' : `arm ${r.member}`;
+  const who = memberName(r.member);
   return r.s_m === null ? who : `${who} at ${formatQuantity(r.s_m, 'length', design.units)}`;
 }
 

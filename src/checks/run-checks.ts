@@ -9,9 +9,11 @@ import { deflectionChecks } from './deflection-checks.ts';
 import { vortexChecks } from './vortex-checks.ts';
 import { fatigueChecks } from './fatigue-checks.ts';
 import { memberChecks } from './member-checks.ts';
+import { anchorageChecks } from './anchorage-checks.ts';
+import { anchorBoltFatigue } from './anchor-bolt-fatigue.ts';
 
 export function runChecks(design: Design, analysis: DesignAnalysis): CheckResults {
-  const parts: CheckedRecords[] = [memberChecks(design, analysis), deflectionChecks(design, analysis), fatigueChecks(design, analysis), vortexChecks(design, analysis)];
+  const parts: CheckedRecords[] = [memberChecks(design, analysis), deflectionChecks(design, analysis), anchorageChecks(design, analysis), fatigueChecks(design, analysis), anchorBoltFatigue(design, analysis), vortexChecks(design, analysis)];
   const records = parts.flatMap((p) => p.records);
   const steps = new Map(parts.flatMap((p) => [...p.steps]));
   const governing = governingOf(records, (r) => (steps.get(r) ?? ((): CalcStep[] => []))());

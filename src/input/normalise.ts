@@ -51,6 +51,7 @@ export function normalise(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?
   (input.structure.arms ?? []).forEach((a, i) => {
     const path: InputPath = ['structure', 'arms', i];
     if (a.id === 'pole') problems.push(error([...path, 'id'], "'pole' is reserved for attachments on the pole; choose another arm id"));
+    if (a.id === 'anchor-bolts' || a.id === 'base-plate') problems.push(error([...path, 'id'], `'${a.id}' is reserved: the checks report the ${a.id.replace('-', ' ')} under it; choose another arm id`));
     if (armIds.has(a.id)) problems.push(error([...path, 'id'], `duplicate arm id '${a.id}'; each arm needs its own id`));
     armIds.add(a.id);
     if (a.attachHeight > poleIn.height * (1 + FIT_TOL)) {

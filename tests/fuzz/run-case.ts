@@ -50,8 +50,9 @@ export function nonFinite(value: unknown, opts: { readonly text?: boolean } = {}
   return out;
 }
 
-/** Keys of the results JSON that may be null by design (a dead or ice case has no wind angle). */
-const NULLABLE_KEYS = new Set(['windAngle_rad']);
+/** Keys of the results JSON that may be null by design: a dead or ice case has no wind angle;
+ * a check with no station (anchor bolts, base plate) has no s_m. */
+const NULLABLE_KEYS = new Set(['windAngle_rad', 's_m']);
 
 /** Keys of the results JSON that carry a unit must hold numbers: JSON.stringify writes NaN as null. */
 export function nullQuantities(jsonText: string): string[] {

@@ -54,7 +54,7 @@ export function checkSections(loaded: LoadedDesign, analysis: DesignAnalysis, ch
 const ratioText = (r: CheckRecord): string => (Number.isFinite(r.ratio) ? r.ratio.toFixed(3) : 'not made');
 
 function placeText(r: CheckRecord, d: Display): string {
-  const who = r.member === 'anchor-bolts' ? 'anchor bolts' : r.member === 'base-plate' ? 'base plate' : memberText(r.member);
+  const who = memberText(r.member);
   return r.s_m === null ? who : `${who}, ${d.q(r.s_m, 'length')}`;
 }
 

@@ -1,6 +1,7 @@
 // Section "Design criteria and assumptions": material, limits, resistance factors, analysis
 // settings, and every assumption with its value, whether it was given or defaulted, and its source.
-import type { LoadedDesign } from '../../design/design.ts';
+import type { AnchorBolts, LoadedDesign } from '../../design/design.ts';
+import { boltThread, threadName } from '../../design/thread-tables.ts';
 import { formatNumber } from '../../units/units.ts';
 import type { Block, DocSection } from '../document.ts';
 import { assumptionValue, display, fractionText } from './display.ts';
@@ -55,9 +56,9 @@ export function criteriaSection(loaded: LoadedDesign, secondOrder: boolean): Doc
 
   const bolts = c.anchorBolts;
   if (bolts === null) {
-    blocks.push({ kind: 'paragraph', text: 'No anchor bolts were entered (criteria.anchorBolts). polebook does not yet check anchor bolts or the base plate: the factored base reactions and the foundation design envelope in the results are the forces to check them with, by hand or another tool.' });
+    blocks.push({ kind: 'paragraph', text: 'No anchor bolts were entered (criteria.anchorBolts), so the anchor bolts and the base plate are not checked in this package: the factored base reactions and the foundation design envelope in the results are the forces to check them with.' });
   } else {
-    blocks.push({ kind: 'paragraph', text: 'The anchor bolts and base plate below are echoed as entered. polebook does not yet check anchor bolts or the base plate: the factored base reactions and the foundation design envelope in the results are the forces to check them with, by hand or another tool.' });
+    blocks.push({ kind: 'paragraph', text: 'The anchor bolts and base plate below are checked for every factored combination from the base reaction (see the design checks). Their embedment in the concrete and the foundation are not checked.' });
     blocks.push({
       kind: 'table',
       title: 'Anchor bolts',
@@ -67,6 +68,7 @@ export function criteriaSection(loaded: LoadedDesign, secondOrder: boolean): Doc
         ['Number of bolts', `${bolts.count} bolts`],
         ['Bolt circle diameter', d.q(bolts.circleDiameter_m, 'section')],
         ['Bolt diameter', d.q(bolts.boltDiameter_m, 'section')],
+        ['Thread', threadText(bolts)],
         ['Bolt steel', bolts.grade !== null ? `ASTM F1554 Grade ${bolts.grade}` : 'strengths as given'],
         ['Bolt tensile strength, Fu', d.q(bolts.Fu_Pa, 'stress')],
         ['Bolt yield strength, Fy', d.q(bolts.Fy_Pa, 'stress')],
@@ -78,7 +80,7 @@ export function criteriaSection(loaded: LoadedDesign, secondOrder: boolean): Doc
   const plate = c.basePlate;
   blocks.push(
     plate === null
-      ? { kind: 'paragraph', text: 'No base plate was entered (criteria.basePlate); the base plate is not checked by polebook.' }
+      ? { kind: 'paragraph', text: 'No base plate was entered (criteria.basePlate), so the base plate is not checked in this package.' }
       : { kind: 'table', title: 'Base plate', header: [...ITEM_VALUE], widths: ['*', 150], rows: [['Plate thickness', d.q(plate.thickness_m, 'section')], ['Plate yield strength, Fy', d.q(plate.Fy_Pa, 'stress')]] },
   );
 
@@ -110,3 +112,10 @@ export function criteriaSection(loaded: LoadedDesign, secondOrder: boolean): Doc
 
 /** A long input key may break after its dots (a zero-width space), so it cannot widen the table past the margin. */
 const breakableKey = (key: string): string => key.replace(/\./g, '.\u200b');
+
+/** The bolt thread as the anchor checks take it: given, from the coarse-thread table, or unknown. */
+function threadText(bolts: AnchorBolts): string {
+  const t = boltThread(bolts);
+  if (t === null) return 'not a standard coarse-thread size and not given: the anchor checks cannot be made';
+  return `${threadName(t)} (${t.from === 'table' ? 'standard coarse thread of the size' : 'as given'})`;
+}

@@ -1,5 +1,6 @@
 // Printing helpers for the section builders: every number leaves here with its unit,
 // in the user's system (units.ts does the conversion and the digits).
+import { memberName } from '../../design/member-names.ts';
 import type { Assumption, Attachment, Offset, StructureKind, TubeSection } from '../../design/design.ts';
 import { formatNumber, formatQuantity, type Dim, type UnitSystem } from '../../units/units.ts';
 
@@ -38,9 +39,7 @@ export function fractionText(ratio: number, of: string): string {
   return `${of}/${formatNumber(1 / ratio, 4)}`;
 }
 
-export function memberText(member: string): string {
-  return member === 'pole' ? 'pole' : `arm ${member}`;
-}
+export const memberText = memberName;
 
 export function positionText(a: Attachment, d: Display): string {
   return a.member === 'pole' ? `${d.q(a.position_m, 'length')} above base` : `${d.q(a.position_m, 'length')} from arm root`;

@@ -1,7 +1,7 @@
 // Section "Scope and cautions": what the package covers and what it does not (text in templates/scope.md).
 import type { LoadedDesign } from '../../design/design.ts';
 import type { DocSection } from '../document.ts';
-import { KIND_LABEL } from './display.ts';
+import { KIND_LABEL, display } from './display.ts';
 import { templateBlocks } from './templates.ts';
 import { labelSections } from '../section-labels.ts';
 import { INPUT_ECHO_ID } from './input-echo-section.ts';
@@ -46,16 +46,18 @@ function checksMade(checks: CheckResults | null): string {
 /** The standing list (templates/scope-not-checked.md), then every check type this package does not make. */
 function checksNotMade(loaded: LoadedDesign, checks: CheckResults | null): string {
   const made = new Set((checks?.records ?? []).map((r) => r.type));
+  const bolts = loaded.design.criteria.anchorBolts;
+  const d = display(loaded.design.units);
+  const noBolts = 'no anchor bolts are given (criteria.anchorBolts); check them with the base reactions';
   const why: Partial<Record<CheckType, string>> = {
     fatigue: loaded.design.fatigue === null ? 'no fatigue loads are given (loads.fatigue)' : 'not made in this package',
     'deflection-fatigue': loaded.design.fatigue === null ? 'no fatigue loads are given' : 'no galloping or truck-gust load applies to this structure',
     'deflection-dead': 'there is no arm',
-    // The anchorage checks are not built yet: say so, whatever the input gives.
-    'bolt-tension': 'polebook does not make anchorage checks yet; check the anchor bolts with the base reactions',
-    'bolt-shear': 'polebook does not make anchorage checks yet',
-    'bolt-combined': 'polebook does not make anchorage checks yet',
-    'bolt-bending': 'polebook does not make anchorage checks yet',
-    'base-plate': 'polebook does not make anchorage checks yet; check the base plate with the base reactions',
+    'bolt-tension': noBolts,
+    'bolt-shear': noBolts,
+    'bolt-combined': noBolts,
+    'bolt-bending': bolts === null ? noBolts : `the stand-off (${d.q(bolts.standOff_m, 'section')}) is not more than one bolt diameter, so bolt bending is neglected (from memory, verify)`,
+    'base-plate': bolts === null ? noBolts : 'no base plate is given (criteria.basePlate)',
   };
   const absent = CHECK_ORDER.filter((t) => !made.has(t)).map((t) => `- ${CHECK_TITLES[t]}: not checked${why[t] ? ` (${why[t]})` : ''}.`);
   return [readTemplate('scope-not-checked').trim(), ...absent].join('\n');
