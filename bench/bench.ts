@@ -10,6 +10,7 @@ import { analyzeAll } from '../src/analysis/analyze.ts';
 import { modalAnalysis } from '../src/analysis/modal.ts';
 import type { AnalysisOptions } from '../src/analysis/analysis-types.ts';
 import { MODES_REPORTED } from '../src/analyse-design.ts';
+import { runChecks } from '../src/checks/run-checks.ts';
 import { loadDesignFile } from '../src/input/index.ts';
 import { buildLoadCases, expandCombinations } from '../src/loads/index.ts';
 import { buildFrame } from '../src/model/build-frame.ts';
@@ -31,6 +32,7 @@ interface StageTimes {
   readonly analysis: Timing;
   readonly firstOrder: Timing;
   readonly modes: Timing;
+  readonly checks: Timing;
   readonly total: Timing;
 }
 
@@ -43,7 +45,7 @@ function stageTimes(file: string): StageTimes {
     maxIterations: design.analysis.pDeltaMaxIterations,
     stationSpacing_m: design.analysis.stationSpacing_m,
   };
-  const t = { frame: [] as number[], loads: [] as number[], analysis: [] as number[], firstOrder: [] as number[], modes: [] as number[], total: [] as number[] };
+  const t = { frame: [] as number[], loads: [] as number[], analysis: [] as number[], firstOrder: [] as number[], modes: [] as number[], checks: [] as number[], total: [] as number[] };
   let info = { nodes: 0, elements: 0, combos: 0 };
   for (let k = 0; k < WARMUP + RUNS; k++) {
     const t0 = performance.now();
@@ -52,10 +54,12 @@ function stageTimes(file: string): StageTimes {
     const cases = buildLoadCases(design, model);
     const combos = expandCombinations(design, cases);
     const t2 = performance.now();
-    analyzeAll(model, cases, combos, options);
+    const results = analyzeAll(model, cases, combos, options);
     const t3 = performance.now();
-    modalAnalysis(model, MODES_REPORTED);
+    const modes = modalAnalysis(model, MODES_REPORTED);
     const t4 = performance.now();
+    runChecks(design, { model, cases, combinations: combos, options, results, modes });
+    const t4c = performance.now();
     // first order alone, for comparison (not part of the pipeline total)
     analyzeAll(model, cases, combos, { ...options, secondOrder: false });
     const t5 = performance.now();
@@ -64,8 +68,9 @@ function stageTimes(file: string): StageTimes {
     t.loads.push(t2 - t1);
     t.analysis.push(t3 - t2);
     t.modes.push(t4 - t3);
-    t.total.push(t4 - t0);
-    t.firstOrder.push(t5 - t4);
+    t.checks.push(t4c - t4);
+    t.total.push(t4c - t0);
+    t.firstOrder.push(t5 - t4c);
     info = { nodes: model.nodes.length, elements: model.elements.length, combos: combos.length };
   }
   return {
@@ -75,6 +80,7 @@ function stageTimes(file: string): StageTimes {
     analysis: summarise(t.analysis),
     firstOrder: summarise(t.firstOrder),
     modes: summarise(t.modes),
+    checks: summarise(t.checks),
     total: summarise(t.total),
   };
 }
@@ -92,19 +98,20 @@ console.log(`Machine at start: ${load()}. A load near or above the number of cor
 console.log('medians and the upper percentiles then grow; the fastest run ("min") stays close to the cost of the code.');
 console.log(`\nPer example and stage. The ${TARGET_MS} ms target applies to "analysis": analyzeAll, every combination`);
 console.log('with P-delta as the example asks, stations and exact extremes. "first order" is the same without');
-console.log('P-delta, for comparison only; "pipeline" = frame + loads + analysis + modes.');
+console.log('P-delta, for comparison only; "checks" = every design check of every station and combination;');
+console.log('"pipeline" = frame + loads + analysis + modes + checks.');
 const files = readdirSync(examples).filter((f) => /\.(ya?ml|json)$/.test(f)).sort();
 const rows = files.map((f) => ({ file: f, s: stageTimes(join(examples, f)) }));
 const col = (s: string, w: number): string => s.padStart(w);
 console.log(
   '\n' + 'example'.padEnd(22) + col('nodes', 6) + col('combos', 7) + col('frame', 8) + col('loads', 8) +
-    col('analysis', 22) + col('first order', 22) + col('modes', 20) + col('pipeline', 22),
+    col('analysis', 22) + col('first order', 22) + col('modes', 20) + col('checks', 20) + col('pipeline', 22),
 );
 for (const { file, s } of rows) {
   console.log(
     file.padEnd(22) + col(String(s.nodes), 6) + col(String(s.combos), 7) +
       col(s.frame.median_ms.toFixed(2), 8) + col(s.loads.median_ms.toFixed(2), 8) +
-      col(fmtTiming(s.analysis), 22) + col(fmtTiming(s.firstOrder), 22) + col(fmtTiming(s.modes), 20) + col(fmtTiming(s.total), 22),
+      col(fmtTiming(s.analysis), 22) + col(fmtTiming(s.firstOrder), 22) + col(fmtTiming(s.modes), 20) + col(fmtTiming(s.checks), 20) + col(fmtTiming(s.total), 22),
   );
 }
 console.log(`\nAnalysis (all combinations, P-delta, stations, extremes) against the ${TARGET_MS} ms target:`);
@@ -115,6 +122,11 @@ for (const { file, s } of rows) {
     `  ${file.padEnd(22)} median ${s.analysis.median_ms.toFixed(2).padStart(6)} ms (75th pct ${s.analysis.p75_ms.toFixed(2)}, min ${s.analysis.min_ms.toFixed(2)}), ` +
       `${perCombo.toFixed(2)} ms per combination, ${(TARGET_MS / s.analysis.median_ms).toFixed(1)}x headroom at the median: ${verdict}`,
   );
+}
+console.log('\nChecks (every station of every combination) against the analysis itself; target: no more, at the median:');
+for (const { file, s } of rows) {
+  const ratio = s.checks.median_ms / s.analysis.median_ms;
+  console.log(`  ${file.padEnd(22)} checks ${s.checks.median_ms.toFixed(2).padStart(6)} ms, analysis ${s.analysis.median_ms.toFixed(2).padStart(6)} ms: ${ratio.toFixed(2)}x, ${ratio <= 1 ? 'met' : 'NOT MET'}`);
 }
 console.log(`Machine after the example runs: ${load()}.`);
 

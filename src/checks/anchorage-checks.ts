@@ -156,10 +156,10 @@ function tensionSteps(c: StepCollector, g: BoltGeometry, phiT: number, Fb: numbe
   const { bolts, areas } = g;
   const rodNominal = bolts.Fu_Pa * areas.At_m2;
   const aiscNominal = FNT_OF_FU * bolts.Fu_Pa * areas.Ab_m2;
-  c.add({ description: 'Tensile strength of the threaded rod on its stress area', symbol: 'Fu At', formula: 'Fu At', substituted: [qty(bolts.Fu_Pa, 'stress'), ' × ', qty(areas.At_m2, 'sectionArea')], result: qty(rodNominal, 'force'), source: 'tensile stress area of the thread' });
-  c.add({ description: 'Nominal tensile strength on the nominal area, Fnt = 0.75 Fu', symbol: 'Fnt Ab', formula: 'Fnt Ab = 0.75 Fu Ab', substituted: ['0.75 × ', qty(bolts.Fu_Pa, 'stress'), ' × ', qty(areas.Ab_m2, 'sectionArea')], result: qty(aiscNominal, 'force'), source: `${J3}, Eq. J3-1, Table J3.2 (threaded parts)` });
+  c.add({ description: 'Tensile strength of the threaded rod on its stress area', symbol: 'Rn,rod', formula: 'Rn,rod = Fu At', substituted: [qty(bolts.Fu_Pa, 'stress'), ' × ', qty(areas.At_m2, 'sectionArea')], result: qty(rodNominal, 'force'), source: 'tensile stress area of the thread' });
+  c.add({ description: 'Nominal tensile strength on the nominal area, Fnt = 0.75 Fu', symbol: 'Rn,J3', formula: 'Rn,J3 = Fnt Ab = 0.75 Fu Ab', substituted: ['0.75 × ', qty(bolts.Fu_Pa, 'stress'), ' × ', qty(areas.Ab_m2, 'sectionArea')], result: qty(aiscNominal, 'force'), source: `${J3}, Eq. J3-1, Table J3.2 (threaded parts)` });
   const phiRn = phiT * Math.min(rodNominal, aiscNominal);
-  c.add({ description: 'Design axial resistance of a bolt (the smaller nominal value)', symbol: 'φRn', formula: 'φRn = φ min(Fu At, Fnt Ab)', substituted: [`${phiT} × `, qty(Math.min(rodNominal, aiscNominal), 'force')], result: qty(phiRn, 'force'), source: 'resistance factor criteria.resistanceFactors.boltTension', status: Fb <= phiRn * (1 + 1e-9) ? 'ok' : 'fail' });
+  c.add({ description: 'Design axial resistance of a bolt (the smaller nominal value)', symbol: 'φRn', formula: 'φRn = φ min(Rn,rod, Rn,J3)', substituted: [`${phiT} × min(`, qty(rodNominal, 'force'), ', ', qty(aiscNominal, 'force'), ')'], result: qty(phiRn, 'force'), source: 'resistance factor criteria.resistanceFactors.boltTension', status: Fb <= phiRn * (1 + 1e-9) ? 'ok' : 'fail' });
 }
 
 function shearSteps(c: StepCollector, g: BoltGeometry, phiV: number, Vb: number): void {

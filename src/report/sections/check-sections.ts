@@ -38,13 +38,15 @@ export function checkSections(loaded: LoadedDesign, analysis: DesignAnalysis, ch
     blocks.push({ kind: 'paragraph', text: recordSentence(r, d) });
     for (const step of g.steps) blocks.push({ kind: 'step', step });
     const rows = worstPerCombination(checks.records.filter((x) => x.type === r.type && x.member === r.member));
+    // Anchor bolts and base plate have no station: one record per combination, no station column.
+    const stations = rows.some((x) => x.s_m !== null);
     if (rows.length > 1) {
       blocks.push({
         kind: 'table',
-        title: `${CHECK_TITLES[r.type]}, ${memberText(r.member)}: governing station of each combination`,
-        header: ['Combination', 'Station', 'Demand', 'Capacity', 'Ratio', 'Result'],
-        widths: ['*', 60, 70, 70, 40, 40],
-        rows: rows.map((x) => [x.combination ?? '—', x.s_m === null ? '—' : d.q(x.s_m, 'length'), d.q(x.demand.si, x.demand.dim), d.q(x.capacity.si, x.capacity.dim), ratioText(x), STATUS_TEXT[x.status]]),
+        title: `${CHECK_TITLES[r.type]}, ${memberText(r.member)}: ${stations ? 'governing station of each combination' : 'each combination'}`,
+        header: ['Combination', ...(stations ? ['Station'] : []), 'Demand', 'Capacity', 'Ratio', 'Result'],
+        widths: ['*', ...(stations ? [60] : []), 70, 70, 40, 40],
+        rows: rows.map((x) => [x.combination ?? '—', ...(stations ? [x.s_m === null ? '—' : d.q(x.s_m, 'length')] : []), d.q(x.demand.si, x.demand.dim), d.q(x.capacity.si, x.capacity.dim), ratioText(x), STATUS_TEXT[x.status]]),
       });
     }
   }
@@ -59,8 +61,9 @@ function placeText(r: CheckRecord, d: Display): string {
 }
 
 function recordSentence(r: CheckRecord, d: Display): string {
-  const where = `${placeText(r, d)}${r.combination !== null ? `, under ${r.combination}` : ''}`;
-  const head = `${r.label} at ${where}: demand ${d.q(r.demand.si, r.demand.dim)}, capacity ${d.q(r.capacity.si, r.capacity.dim)}, ratio ${ratioText(r)}: ${STATUS_TEXT[r.status]}. Equation: ${r.equation}.`;
+  // A member record names its place; an anchorage label already says what it is about.
+  const at = r.s_m === null && (r.member === 'anchor-bolts' || r.member === 'base-plate') ? '' : ` at ${placeText(r, d)}`;
+  const head = `${r.label}${at}${r.combination !== null ? `, under ${r.combination}` : ''}: demand ${d.q(r.demand.si, r.demand.dim)}, capacity ${d.q(r.capacity.si, r.capacity.dim)}, ratio ${ratioText(r)}: ${STATUS_TEXT[r.status]}. Equation: ${r.equation}.`;
   return r.reason === '' ? head : `${head} ${r.reason[0]!.toUpperCase()}${r.reason.slice(1)}.`;
 }
 
