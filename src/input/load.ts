@@ -8,6 +8,7 @@ import type { UnitSystem } from '../units/units.ts';
 import { normalise } from './normalise.ts';
 import { plausibilityWarnings } from './plausibility.ts';
 import { readInputBytes } from './read-input-file.ts';
+import { decodeInput, sizeProblem, unsafeTextProblems } from './input-text.ts';
 import { locate } from './positions.ts';
 import { textPath } from './text-path.ts';
 import { formatPath, type Problem } from './problem.ts';
@@ -31,11 +32,13 @@ export function inputHash(bytes: Uint8Array | string): string {
  * env defaults to the process environment (SOURCE_DATE_EPOCH). */
 export function loadDesignFile(file: string, env?: LoadEnv): LoadedDesign {
   const bytes = readInputBytes(file);
-  return loadFromText(bytes.toString('utf8'), file, inputHash(bytes), env ?? { SOURCE_DATE_EPOCH: process.env.SOURCE_DATE_EPOCH });
+  return loadFromText(decodeInput(file, bytes), file, inputHash(bytes), env ?? { SOURCE_DATE_EPOCH: process.env.SOURCE_DATE_EPOCH });
 }
 
 /** Validates design text as if read from `file`. env defaults to the process environment. */
 export function loadDesignText(text: string, file: string, env?: LoadEnv): LoadedDesign {
+  const big = sizeProblem(file, Buffer.byteLength(text, 'utf8'));
+  if (big) throw big;
   return loadFromText(text, file, inputHash(Buffer.from(text, 'utf8')), env ?? { SOURCE_DATE_EPOCH: process.env.SOURCE_DATE_EPOCH });
 }
 
@@ -61,6 +64,8 @@ function loadFromText(original: string, file: string, hash: string, env: LoadEnv
   if (data === null || data === undefined) {
     throw new InputError([{ file, line: 1, col: 1, path: '', message: 'the file is empty; expected an input starting with formatVersion: 1 (`polebook new <kind>` writes a starter)', severity: 'error' }]);
   }
+  const unsafe = unsafeTextProblems(data);
+  if (unsafe.length > 0) throw new InputError(sortByPlace(unsafe.map(toDiagnostic)));
   const system: UnitSystem = isRecord(data) && data.units === 'si' ? 'si' : 'us';
   const schema = schemaFor(system);
   const parsed = schema.safeParse(data);

@@ -1,7 +1,7 @@
 // Validated input (schema output, already in SI) -> the normalised Design, with the
 // checks that the geometry can be built and the assumptions recorded.
 import type {
-  AnalysisSettings, Arm, Attachment, BaseFixity, CombinationSpec, Design, IceInput, Material,
+  AnalysisSettings, Arm, Attachment, BaseFixity, CombinationSpec, Design, FatigueInput, IceInput, Material,
   Offset, Pole, Project, StructureKind, WindInput,
 } from '../design/design.ts';
 import { DEG_RAD, formatQuantity, type UnitSystem } from '../units/units.ts';
@@ -15,6 +15,8 @@ import { buildCriteria } from './criteria.ts';
 import { buildFatigue } from './fatigue.ts';
 import { closest } from './suggest.ts';
 import { windDirections } from './wind-directions.ts';
+import { MAX_ANALYSES, MAX_STATION_RESULTS } from './size-limits.ts';
+import { ARM_RISE_MAX_RAD, ARM_RISE_MIN_RAD } from './plausibility.ts';
 
 export const KIND_TITLES: Readonly<Record<StructureKind, string>> = {
   'cantilever-sign': 'Cantilevered sign support',
@@ -58,7 +60,9 @@ export function normalise(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?
       problems.push(error([...path, 'attachHeight'], `arm ${a.id} is attached at ${len(a.attachHeight)}, above the pole top at ${len(poleIn.height)}; expected at most the pole height`));
     }
     const rise = log.take('armRise', a.rise, { key: `structure.arms[${i}].rise`, label: `Rise angle of arm ${a.id} above horizontal` });
-    if (Math.abs(rise) >= 90 * DEG_RAD) problems.push(error([...path, 'rise'], 'expected a rise angle between -90 and 90 deg'));
+    if (!(rise >= ARM_RISE_MIN_RAD && rise <= ARM_RISE_MAX_RAD)) {
+      problems.push(error([...path, 'rise'], `a rise of ${formatQuantity(rise, 'angle', system)} is outside ${ARM_RISE_MIN_RAD / DEG_RAD} to ${ARM_RISE_MAX_RAD / DEG_RAD} deg, the arms polebook models (limits of ours): the rise is the arm's angle above horizontal, 0 to 15 deg for most mast arms; a member closer to vertical is a pole, not an arm`));
+    }
     const section = buildSection(a.section, a.length, [...path, 'section'], system, problems);
     if (section) arms.push({ id: a.id, attachHeight_m: a.attachHeight, direction_rad: a.direction, length_m: a.length, rise_rad: rise, section });
   });
@@ -77,6 +81,7 @@ export function normalise(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?
       ? defaultCombinations(ice !== null, log.take('serviceWindFactor', input.criteria?.serviceWindFactor))
       : withDeadService(userCombinations(input.combinations, ice !== null, problems));
   const analysis = buildAnalysis(input, log, problems);
+  problems.push(...resultSizeProblems(input, wind.directions.length, combinations, fatigue, analysis));
 
   if (problems.some((p) => p.severity === 'error') || !pole) return { design: undefined, problems };
   const design: Design = {
@@ -305,4 +310,22 @@ function buildAnalysis(input: DesignInput, log: AssumptionLog, problems: Problem
     pDeltaMaxIterations: log.take('pDeltaMaxIterations', a.pDeltaMaxIterations),
     stationSpacing_m: log.take('stationSpacing', a.stationSpacing),
   };
+}
+
+/** The analyses a build would run and the station results it would hold, against the limits
+ * (size-limits.ts), before any work: a few lines of YAML can otherwise ask for hours. */
+function resultSizeProblems(input: DesignInput, directions: number, combinations: readonly CombinationSpec[], fatigue: FatigueInput | null, analysis: AnalysisSettings): Problem[] {
+  const withWind = (c: CombinationSpec) => (c.factors.wind ?? 0) !== 0 || (c.factors['ice-wind'] ?? 0) !== 0;
+  const fatigueCases = fatigue ? [fatigue.galloping, fatigue.naturalGust, fatigue.truckGust].filter((x) => x !== null).length : 0;
+  const analyses = combinations.reduce((n, c) => n + (withWind(c) ? Math.max(directions, 1) : 1), 0) + fatigueCases;
+  const where: InputPath = input.combinations === undefined || input.combinations === 'default' ? ['loads', 'wind'] : ['combinations'];
+  if (analyses > MAX_ANALYSES) {
+    return [error(where, `${combinations.length} combinations with ${directions} wind directions make ${analyses} analyses, more than the ${MAX_ANALYSES} polebook runs in one build (a limit of ours; a design needs a few dozen): use fewer wind directions or combinations`)];
+  }
+  const members = [input.structure.pole.height, ...(input.structure.arms ?? []).map((a) => a.length)];
+  const stations = members.reduce((n, L) => n + Math.ceil(L / analysis.stationSpacing_m) + 1, 0);
+  if (stations * analyses > MAX_STATION_RESULTS) {
+    return [error(['analysis', 'stationSpacing'], `${stations} result stations on ${members.length} members in ${analyses} analyses are ${stations * analyses} station results, more than the ${MAX_STATION_RESULTS} polebook holds (a limit of ours): give a larger stationSpacing (about ${formatQuantity((analysis.stationSpacing_m * stations * analyses) / MAX_STATION_RESULTS, 'length', input.units)} or more) or fewer analyses`)];
+  }
+  return [];
 }

@@ -12,6 +12,15 @@ export const ARM_LENGTH_USUAL_M = 75 * FT_M;
 /** Sign panels with their bracing weigh a few psf; above this it reads like a whole weight (common practice). */
 export const PANEL_WEIGHT_SUSPECT_PA = 25 * PSF_PA;
 
+/** Arm rises polebook accepts (limits of ours): a mast arm rises 0 to 15 deg, a luminaire arm a little more. */
+export const ARM_RISE_MIN_RAD = (-45 * Math.PI) / 180;
+export const ARM_RISE_MAX_RAD = (80 * Math.PI) / 180;
+/** An arm rising more than this is nearly vertical: accepted, but more a pole than an arm (common practice). */
+export const ARM_RISE_STEEP_RAD = (60 * Math.PI) / 180;
+/** Arms closer than this in height and plan direction lie on one another (a copied block). */
+const SAME_ARM_HEIGHT_M = 0.05;
+const SAME_ARM_DIRECTION_RAD = (1 * Math.PI) / 180;
+
 /** Tube walls outside these D/t read like a slip of the unit or the field (common practice). */
 export const WALL_DT_PLAUSIBLE = { min: 10, max: 200 } as const;
 
@@ -76,10 +85,15 @@ export function plausibilityWarnings(input: DesignInput, poleRootDiameter_m: num
         warning(['structure', 'arms', i, a.rise === undefined ? 'attachHeight' : 'rise'], `the tip of arm ${a.id} is ${formatQuantity(-tipHeight_m, 'length', units)} below the pole base (attached at ${formatQuantity(a.attachHeight, 'length', units)}, ${formatQuantity(a.length, 'length', units)} long, rise ${formatNumber(((a.rise ?? 0) * 180) / Math.PI, 3)} deg); check the rise and its sign`),
       );
     }
+    if (a.rise !== undefined && a.rise > ARM_RISE_STEEP_RAD && a.rise <= ARM_RISE_MAX_RAD) {
+      out.push(warning(['structure', 'arms', i, 'rise'], `arm ${a.id} rises ${formatNumber((a.rise * 180) / Math.PI, 3)} deg, nearly vertical (mast arms rise 0 to 15 deg, common practice); check that the rise is meant, and not its complement or a second pole`));
+    }
     if (a.length > ARM_LENGTH_USUAL_M * (1 + 1e-9)) {
       out.push(warning(['structure', 'arms', i, 'length'], `arm ${a.id} is ${formatQuantity(a.length, 'length', units)} long, beyond the usual 75 ft (22.9 m) of mast arms (our limit); check the value and its unit`));
     }
   });
+  sameArmWarnings(input, out);
+  offsetWarnings(input, out);
   (input.attachments?.panels ?? []).forEach((p, i) => {
     if (p.weightPerArea > PANEL_WEIGHT_SUSPECT_PA) {
       const path: InputPath = ['attachments', 'panels', i, 'weightPerArea'];
@@ -93,4 +107,36 @@ export function plausibilityWarnings(input: DesignInput, poleRootDiameter_m: num
     out.push(warning(['criteria', 'anchorBolts', 'circleDiameter'], 'the bolt circle is not larger than the pole base; anchor bolts normally sit outside the tube. Check the value and its unit'));
   }
   return out;
+}
+
+/** Two arms at one height and one plan direction lie on one another: usually a block copied and not edited. */
+function sameArmWarnings(input: DesignInput, out: Problem[]): void {
+  const arms = input.structure.arms ?? [];
+  arms.forEach((a, i) => {
+    const twin = arms.findIndex((b, j) => {
+      if (j >= i) return false;
+      const dPlan = Math.abs(((a.direction - b.direction + 3 * Math.PI) % (2 * Math.PI)) - Math.PI);
+      return Math.abs(a.attachHeight - b.attachHeight) <= SAME_ARM_HEIGHT_M && dPlan <= SAME_ARM_DIRECTION_RAD;
+    });
+    if (twin >= 0) {
+      out.push(warning(['structure', 'arms', i, 'direction'], `arm ${a.id} has the height and plan direction of arm ${arms[twin]!.id}: the two lie on one another. Check the direction and the attachment height (a copied block?)`));
+    }
+  });
+}
+
+/** An attachment offset larger than the whole structure is a slip of the unit (inches typed as feet, mm as m). */
+function offsetWarnings(input: DesignInput, out: Problem[]): void {
+  const size = Math.max(input.structure.pole.height, ...(input.structure.arms ?? []).map((a) => a.length));
+  const check = (kind: 'panels' | 'points', list: readonly { readonly id: string; readonly offset?: { readonly vertical?: number | undefined; readonly lateral?: number | undefined } | undefined }[] | undefined) => {
+    (list ?? []).forEach((x, i) => {
+      for (const key of ['vertical', 'lateral'] as const) {
+        const v = x.offset?.[key];
+        if (v !== undefined && Math.abs(v) > size) {
+          out.push(warning(['attachments', kind, i, 'offset', key], `the ${key} offset of ${x.id}, ${formatQuantity(Math.abs(v), 'length', input.units)}, is larger than the structure itself (${formatQuantity(size, 'length', input.units)}); check the value and its unit`));
+        }
+      }
+    });
+  };
+  check('panels', input.attachments?.panels);
+  check('points', input.attachments?.points);
 }

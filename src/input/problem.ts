@@ -1,6 +1,7 @@
 // A problem found in an input file before it is located in the source text.
 // Every stage of validation (schema, geometry, plausibility) reports these; load.ts
 // turns them into located Diagnostics.
+import { escapeUnsafe } from './text-safety.ts';
 
 /** Key path into the input document: object keys and array indexes. */
 export type InputPath = readonly (string | number)[];
@@ -21,7 +22,7 @@ export function formatPath(path: InputPath): string {
   let out = '';
   for (const seg of path) {
     if (typeof seg === 'number') out += `[${seg}]`;
-    else out += out === '' ? seg : `.${seg}`;
+    else out += out === '' ? escapeUnsafe(seg) : `.${escapeUnsafe(seg)}`;
   }
   return out;
 }

@@ -3,6 +3,7 @@
 import { z } from 'zod';
 import { SYSTEM_UNIT, UNITS, formatQuantity, parseQuantity, unitSymbols, type Dim, type UnitSystem } from '../units/units.ts';
 import { PHYSICAL_FLOOR_SI, PHYSICAL_LIMIT_SI } from './physical-limits.ts';
+import { escapeUnsafe } from './text-safety.ts';
 
 export const DIM_NAMES: Readonly<Record<Dim, string>> = {
   length: 'length',
@@ -32,7 +33,11 @@ export function withArticle(noun: string): string {
   return /^[aeiou]/i.test(noun) ? `an ${noun}` : `a ${noun}`;
 }
 
-export type Bound = 'positive' | 'nonNegative' | 'any';
+/** 'planAngle': a plan direction in [0, 360) deg, refused outside rather than wrapped (400 deg is a
+ * mistake for something, not surely 40 deg). */
+export type Bound = 'positive' | 'nonNegative' | 'any' | 'planAngle';
+
+const FULL_TURN = 2 * Math.PI;
 
 const uniq = (xs: string[]): string[] => [...new Set(xs)];
 
@@ -92,6 +97,11 @@ export function quantity(dim: Dim, system: UnitSystem, bound: Bound, text: strin
       }
       const r = parseQuantity(raw, dim, system);
       const si = r.ok ? r.si : NaN;
+      if (bound === 'planAngle' && !(si >= 0 && si < FULL_TURN)) {
+        const turned = ((si % FULL_TURN) + FULL_TURN) % FULL_TURN;
+        ctx.addIssue({ code: 'custom', message: `${String(raw)} is outside 0 to 360 deg: a plan direction is measured from +X toward +Y, at least 0 and below 360 deg; polebook does not wrap it around, so write ${formatQuantity(turned, 'angle', system)} if that is the direction meant` });
+        return z.NEVER;
+      }
       if ((bound === 'positive' && !(si > 0)) || (bound === 'nonNegative' && !(si >= 0))) {
         ctx.addIssue({ code: 'custom', message: `must be ${boundText(bound)}, got ${String(raw)}` });
         return z.NEVER;
@@ -111,17 +121,21 @@ export function quantity(dim: Dim, system: UnitSystem, bound: Bound, text: strin
     .meta({ description: quantityDescription(dim, text) });
 }
 
-/** A plain number (factor, ratio, count) with bounds. */
-export function factor(text: string, min: number, max: number, minInclusive = true) {
+/**
+ * A plain number (factor, ratio, count) with bounds. `meaning` says in words what the number is and
+ * what a plausible value looks like; it goes into the message when a value is out of range, so the
+ * user learns why the limit exists, not only where it is.
+ */
+export function factor(text: string, min: number, max: number, meaning: string, minInclusive = true) {
   const base = z.number({ error: (iss) => (iss.input === undefined ? undefined : `expected a number, got ${describeValue(iss.input)}`) });
-  const bounded = minInclusive ? base.min(min, { error: `must be at least ${min}` }) : base.gt(min, { error: `must be greater than ${min}` });
-  return bounded.max(max, { error: `must be at most ${max}` }).meta({ description: text });
+  const bounded = minInclusive ? base.min(min, { error: (iss) => `${String(iss.input)} is below ${min}: ${meaning}` }) : base.gt(min, { error: (iss) => `${String(iss.input)} is not above ${min}: ${meaning}` });
+  return bounded.max(max, { error: (iss) => `${String(iss.input)} is above ${max}: ${meaning}` }).meta({ description: text });
 }
 
 export function describeValue(v: unknown): string {
   if (v === null) return 'nothing (null)';
   if (Array.isArray(v)) return 'a list';
   if (typeof v === 'object') return 'a block of keys';
-  if (typeof v === 'string') return `the text '${v.length > 40 ? `${v.slice(0, 40)}...` : v}'`;
+  if (typeof v === 'string') return `the text '${escapeUnsafe(v.length > 40 ? `${v.slice(0, 40)}...` : v)}'`;
   return `${typeof v} ${String(v)}`;
 }

@@ -5,6 +5,8 @@ import type { UnitSystem } from '../units/units.ts';
 import { defaultNote } from './defaults.ts';
 import { factor, quantity } from './quantity.ts';
 
+const DRAG_RANGE = 'a drag coefficient is between 0.1 and 3 (about 0.45 to 1.2 for tubes, 1.1 to 1.2 for flat panels)';
+
 /** A deflection limit: "L/100", "1/100" or a fraction such as 0.01. */
 export const deflectionLimit = (description: string) =>
   z
@@ -45,7 +47,7 @@ function deflectionSchema(system: UnitSystem) {
 function anchorBoltsSchema(system: UnitSystem) {
   return z
     .strictObject({
-      count: z.int({ error: 'expected a whole number of bolts' }).min(3, { error: 'at least 3 anchor bolts are needed' }).max(64, { error: 'at most 64 anchor bolts' }),
+      count: z.int({ error: 'expected a whole number of bolts' }).min(3, { error: 'at least 3 anchor bolts are needed: fewer cannot hold a moment in every direction' }).max(64, { error: 'at most 64 anchor bolts: a pole base has 4 to 12, and polebook stops at 64 (a limit of ours)' }),
       circleDiameter: quantity('section', system, 'positive', 'Diameter of the bolt circle'),
       boltDiameter: quantity('section', system, 'positive', 'Nominal bolt diameter'),
       grade: z
@@ -55,7 +57,7 @@ function anchorBoltsSchema(system: UnitSystem) {
         .meta({ description: 'ASTM F1554 grade (36, 55, 105): sets the yield and tensile strengths. Give this, or tensileStrength and yieldStrength' }),
       tensileStrength: quantity('stress', system, 'positive', 'Specified minimum tensile strength of the bolt steel (instead of grade)').optional(),
       yieldStrength: quantity('stress', system, 'positive', 'Specified minimum yield strength of the bolt steel (instead of grade)').optional(),
-      threadsPerInch: factor('Threads per inch of an inch thread (UNC form), when the bolt is not a standard UNC diameter', 1, 40).optional(),
+      threadsPerInch: factor('Threads per inch of an inch thread (UNC form), when the bolt is not a standard UNC diameter', 1, 40, 'threads per inch of an anchor bolt are between 1 and 40 (a 1 in UNC bolt has 8, a 2 in bolt 4.5)').optional(),
       pitch: quantity('section', system, 'positive', 'Thread pitch of a metric thread (ISO form), when the bolt is not a standard ISO coarse-thread diameter').optional(),
       standOff: quantity('section', system, 'nonNegative', `Clear distance from the bottom of the leveling nut to the top of the concrete. ${defaultNote('boltStandOff')}`).optional(),
     })
@@ -76,19 +78,19 @@ function vortexSchema(system: UnitSystem) {
     .strictObject({
       speedThreshold: quantity('speed', system, 'positive', `Critical vortex-shedding speed below which a member is reported as susceptible. ${defaultNote('vortexThreshold')}`).optional(),
       exemptTaper: quantity('taper', system, 'positive', `Taper at or above which a member is taken as not susceptible. ${defaultNote('vortexExemptTaper')}`).optional(),
-      strouhalRound: factor(`Strouhal number, round tubes. ${defaultNote('strouhalRound')}`, 0.05, 0.5).optional(),
-      strouhalMultisided: factor(`Strouhal number, multisided tubes. ${defaultNote('strouhalMultisided')}`, 0.05, 0.5).optional(),
+      strouhalRound: factor(`Strouhal number, round tubes. ${defaultNote('strouhalRound')}`, 0.05, 0.5, 'the Strouhal number of a tube is between 0.05 and 0.5 (about 0.18 to 0.2 for a circle)').optional(),
+      strouhalMultisided: factor(`Strouhal number, multisided tubes. ${defaultNote('strouhalMultisided')}`, 0.05, 0.5, 'the Strouhal number of a tube is between 0.05 and 0.5 (about 0.15 for 8 to 16 sides)').optional(),
     })
     .meta({ description: 'Vortex shedding: critical speeds of the members in their natural modes' });
 }
 
 export function criteriaSchema(system: UnitSystem) {
   const phi = (name: 'phiFlexure' | 'phiShear' | 'phiTorsion' | 'phiAxial' | 'phiTension' | 'phiBoltTension' | 'phiBoltShear', what: string) =>
-    factor(`Resistance factor, ${what}. ${defaultNote(name)}`, 0, 1, false).optional();
+    factor(`Resistance factor, ${what}. ${defaultNote(name)}`, 0, 1, 'a resistance factor φ reduces a nominal resistance: above 0 and at most 1 (typically 0.75 to 0.95)', false).optional();
   return z.strictObject({
     deflection: deflectionSchema(system).optional(),
-    serviceWindFactor: factor(`Factor on wind in the service combination. ${defaultNote('serviceWindFactor')}`, 0, 2, false).optional(),
-    columnEffectiveLengthFactor: factor(`Effective length factor K of the pole and arms as free-standing cantilever columns. ${defaultNote('columnK')}`, 0.5, 5).optional(),
+    serviceWindFactor: factor(`Factor on wind in the service combination. ${defaultNote('serviceWindFactor')}`, 0, 2, 'the service wind factor scales the design pressures for the deflection checks: above 0 and at most 2 (1 or a little below is usual)', false).optional(),
+    columnEffectiveLengthFactor: factor(`Effective length factor K of the pole and arms as free-standing cantilever columns. ${defaultNote('columnK')}`, 0.5, 5, 'the effective length factor K of a column is between 0.5 (fixed at both ends) and 5; a free-standing cantilever is about 2 to 2.1').optional(),
     resistanceFactors: z
       .strictObject({
         flexure: phi('phiFlexure', 'flexure'),
@@ -107,7 +109,7 @@ export function criteriaSchema(system: UnitSystem) {
 }
 
 export function fatigueSchema(system: UnitSystem) {
-  const importance = (what: string) => factor(`Importance factor, ${what} (overrides the category table)`, 0, 2).optional();
+  const importance = (what: string) => factor(`Importance factor, ${what} (overrides the category table)`, 0, 2, 'a fatigue importance factor scales a fatigue pressure: between 0 and 2 (the category tables give about 0.3 to 1)').optional();
   const caseBlock = <E extends z.ZodRawShape>(what: string, pressureDefault: 'gallopingPressure' | 'naturalGustPressure' | 'truckGustPressure', extra: E) =>
     z
       .union([
@@ -143,10 +145,10 @@ export function fatigueSchema(system: UnitSystem) {
       }),
       dragCoefficients: z
         .strictObject({
-          panels: factor(`Sign panels. ${defaultNote('dragPanels')}`, 0.1, 3).optional(),
-          roundMembers: factor(`Round tubes. ${defaultNote('dragRound')}`, 0.1, 3).optional(),
-          multisidedMembers: factor(`Multisided tubes. ${defaultNote('dragMultisided')}`, 0.1, 3).optional(),
-          points: factor(`Point attachments, on their wind area. ${defaultNote('dragPoints')}`, 0.1, 3).optional(),
+          panels: factor(`Sign panels. ${defaultNote('dragPanels')}`, 0.1, 3, DRAG_RANGE).optional(),
+          roundMembers: factor(`Round tubes. ${defaultNote('dragRound')}`, 0.1, 3, DRAG_RANGE).optional(),
+          multisidedMembers: factor(`Multisided tubes. ${defaultNote('dragMultisided')}`, 0.1, 3, DRAG_RANGE).optional(),
+          points: factor(`Point attachments, on their wind area. ${defaultNote('dragPoints')}`, 0.1, 3, DRAG_RANGE).optional(),
         })
         .optional(),
       poleBaseCategory: detailCategory('the pole-to-base-plate connection'),

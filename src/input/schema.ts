@@ -2,6 +2,7 @@
 // types, the defaults (noted in descriptions, taken from defaults.ts) and the JSON Schema
 // that `polebook schema` prints. Quantities are read in the file's unit system, so the
 // schema is built per system; both give the same JSON Schema.
+import { MAX_ADDED_WIND_DIRECTIONS, MAX_ARMS, MAX_COMBINATIONS, MAX_PANELS, MAX_POINTS, MAX_REVISIONS, listLimit } from './size-limits.ts';
 import { z } from 'zod';
 import type { UnitSystem } from '../units/units.ts';
 import { defaultNote } from './defaults.ts';
@@ -61,7 +62,7 @@ function offsetSchema(system: UnitSystem) {
     .strictObject({
       vertical: quantity('length', system, 'any', 'On an arm: offset of the centroid above (+) or below (-) the arm axis').optional(),
       lateral: quantity('length', system, 'any', 'On an arm: horizontal offset perpendicular to the arm, + to the left looking from root to tip. On the pole: distance from the pole axis').optional(),
-      direction: quantity('angle', system, 'any', 'On the pole only: plan direction of the lateral offset (deg from +X toward +Y)').optional(),
+      direction: quantity('angle', system, 'planAngle', 'On the pole only: plan direction of the lateral offset (deg from +X toward +Y)').optional(),
     })
     .meta({ description: 'Offset of the centroid from the member axis. Default: on the axis' });
 }
@@ -70,7 +71,7 @@ function armSchema(system: UnitSystem) {
   return z.strictObject({
     id: id('Arm id, referred to by attachments (e.g. A1)'),
     attachHeight: quantity('length', system, 'positive', 'Height of the arm axis where it meets the pole, above the pole base'),
-    direction: quantity('angle', system, 'any', 'Plan direction of the arm from the pole (deg from +X toward +Y)'),
+    direction: quantity('angle', system, 'planAngle', 'Plan direction of the arm from the pole (deg from +X toward +Y)'),
     length: quantity('length', system, 'positive', 'Length along the arm axis from the pole face to the tip'),
     rise: quantity('angle', system, 'any', `Rise angle of the arm above horizontal. ${defaultNote('armRise')}`).optional(),
     section: sectionSchema(system),
@@ -87,7 +88,7 @@ function panelSchema(system: UnitSystem) {
     height: quantity('length', system, 'positive', 'Panel height'),
     weightPerArea: quantity('pressure', system, 'nonNegative', 'Weight of the panel and its bracing per panel area (psf | kPa)'),
     offset: offsetSchema(system).optional(),
-    faceDirection: quantity('angle', system, 'any', 'On the pole only: plan direction of the panel face normal (a panel on an arm faces perpendicular to the arm)').optional(),
+    faceDirection: quantity('angle', system, 'planAngle', 'On the pole only: plan direction of the panel face normal (a panel on an arm faces perpendicular to the arm)').optional(),
   });
 }
 
@@ -115,7 +116,7 @@ function windSchema(system: UnitSystem) {
     directions: z
       .strictObject({
         auto: z.boolean().optional().meta({ description: `Find directions from the geometry. ${defaultNote('windAuto')}` }),
-        add: z.array(quantity('angle', system, 'any', 'Plan direction the wind blows toward (deg from +X toward +Y)')).optional(),
+        add: z.array(quantity('angle', system, 'planAngle', 'Plan direction the wind blows toward (deg from +X toward +Y)')).max(MAX_ADDED_WIND_DIRECTIONS, listLimit(MAX_ADDED_WIND_DIRECTIONS, 'added wind directions', 'one every 10 deg')).optional(),
       })
       .optional(),
   });
@@ -124,12 +125,12 @@ function windSchema(system: UnitSystem) {
 function iceSchema(system: UnitSystem) {
   return z.strictObject({
     weightPerArea: quantity('pressure', system, 'positive', `Ice weight per surface area. ${defaultNote('iceWeight')}`).optional(),
-    windFactor: factor('Factor on the design wind pressures acting together with ice (no default: it depends on the governing code)', 0, 1),
+    windFactor: factor('Factor on the design wind pressures acting together with ice (no default: it depends on the governing code)', 0, 1, 'the wind acting with ice is a fraction of the design wind: between 0 and 1 (often about 0.25 to 0.5)'),
   });
 }
 
 function combinationSchema() {
-  const f = (kind: string) => factor(`Load factor on ${kind}`, -5, 5).optional();
+  const f = (kind: string) => factor(`Load factor on ${kind}`, 0, 5, 'a load factor is at least 0 (a load that helps, such as dead load against uplift, takes a smaller factor like 0.9, never a negative one) and at most 5 (code factors are at most about 1.75)').optional();
   return z.strictObject({
     id: id('Combination id'),
     category: z
@@ -147,10 +148,10 @@ function combinationSchema() {
 
 function analysisSchema(system: UnitSystem) {
   return z.strictObject({
-    segmentsPerMember: z.int({ error: 'expected a whole number' }).min(1, { error: 'at least 1' }).max(200, { error: 'at most 200' }).optional().meta({ description: defaultNote('segments') }),
+    segmentsPerMember: z.int({ error: 'expected a whole number' }).min(1, { error: 'at least 1 segment per member' }).max(200, { error: 'at most 200 segments per member: the taper is represented closely with 10 to 40, and more only slows the analysis (a limit of ours)' }).optional().meta({ description: defaultNote('segments') }),
     secondOrder: z.boolean().optional().meta({ description: `true: P-delta analysis. ${defaultNote('secondOrder')}` }),
-    pDeltaTolerance: factor(`Relative change of displacements that ends the P-delta iteration. ${defaultNote('pDeltaTolerance')}`, 0, 0.01, false).optional(),
-    pDeltaMaxIterations: z.int({ error: 'expected a whole number' }).min(2, { error: 'at least 2: the iteration compares each solution with the one before, starting from the first-order one' }).max(1000, { error: 'at most 1000' }).optional().meta({ description: defaultNote('pDeltaMaxIterations') }),
+    pDeltaTolerance: factor(`Relative change of displacements that ends the P-delta iteration. ${defaultNote('pDeltaTolerance')}`, 0, 0.01, 'the P-delta tolerance is the relative change of the displacements that ends the iteration: above 0 and at most 0.01 (1e-6 is typical)', false).optional(),
+    pDeltaMaxIterations: z.int({ error: 'expected a whole number' }).min(2, { error: 'at least 2: the iteration compares each solution with the one before, starting from the first-order one' }).max(1000, { error: 'at most 1000 iterations: the P-delta iteration of a stable pole converges in under 20, so more would only hide a structure that is not converging' }).optional().meta({ description: defaultNote('pDeltaMaxIterations') }),
     stationSpacing: quantity('length', system, 'positive', `Regular spacing of result stations. ${defaultNote('stationSpacing')}`).optional(),
   });
 }
@@ -165,7 +166,7 @@ export function buildInputSchema(system: UnitSystem) {
         structureId: id('Structure id, printed on every page'),
         location: text('Location (road, crossing, station)').optional(),
         owner: text('Owner or client').optional(),
-        revisions: z.array(z.strictObject({ id: id('Revision id, e.g. A or 0'), date: isoDate('Revision date, yyyy-mm-dd'), description: text('What changed') })).optional(),
+        revisions: z.array(z.strictObject({ id: id('Revision id, e.g. A or 0'), date: isoDate('Revision date, yyyy-mm-dd'), description: text('What changed') })).max(MAX_REVISIONS, listLimit(MAX_REVISIONS, 'revisions', 'a package is issued a few times')).optional(),
         preparedBy: text('Prepared by').optional(),
         checkedBy: text('Checked by').optional(),
         engineerOfRecord: text('Engineer of record').optional(),
@@ -178,7 +179,7 @@ export function buildInputSchema(system: UnitSystem) {
           .strictObject({
             E: quantity('stress', system, 'positive', `Modulus of elasticity. ${defaultNote('materialE')}`).optional(),
             G: quantity('stress', system, 'positive', `Shear modulus (or give poissonRatio). ${defaultNote('materialG')}`).optional(),
-            poissonRatio: factor('Poisson ratio; G = E / (2 (1 + poissonRatio))', 0, 0.5, false).optional(),
+            poissonRatio: factor('Poisson ratio; G = E / (2 (1 + poissonRatio))', 0, 0.5, 'the Poisson ratio of a metal is above 0 and at most 0.5 (steel 0.3, aluminium 0.33)', false).optional(),
             yieldStrength: quantity('stress', system, 'positive', `Minimum yield strength. ${defaultNote('materialFy')}`).optional(),
             density: quantity('density', system, 'positive', `Density. ${defaultNote('materialDensity')}`).optional(),
           })
@@ -193,12 +194,12 @@ export function buildInputSchema(system: UnitSystem) {
             })
             .optional(),
         }),
-        arms: z.array(armSchema(system)).optional(),
+        arms: z.array(armSchema(system)).max(MAX_ARMS, listLimit(MAX_ARMS, 'arms', 'a support has one to four')).optional(),
       }),
       attachments: z
         .strictObject({
-          panels: z.array(panelSchema(system)).optional(),
-          points: z.array(pointSchema(system)).optional(),
+          panels: z.array(panelSchema(system)).max(MAX_PANELS, listLimit(MAX_PANELS, 'sign panels', 'a support carries a few')).optional(),
+          points: z.array(pointSchema(system)).max(MAX_POINTS, listLimit(MAX_POINTS, 'point attachments', 'a support carries a few dozen at most')).optional(),
         })
         .optional(),
       loads: z.strictObject({
@@ -207,7 +208,7 @@ export function buildInputSchema(system: UnitSystem) {
         fatigue: fatigueSchema(system).optional(),
       }),
       combinations: z
-        .union([z.literal('default'), z.array(combinationSchema()).min(1, { error: 'give at least one combination, or write default' })])
+        .union([z.literal('default'), z.array(combinationSchema()).min(1, { error: 'give at least one combination, or write default' }).max(MAX_COMBINATIONS, listLimit(MAX_COMBINATIONS, 'combinations', 'a code set has a dozen or two'))])
         .optional()
         .meta({ description: "'default' (the default set, labelled in the package) or a list of combinations with their factors" }),
       criteria: criteriaSchema(system).optional(),

@@ -173,12 +173,12 @@ describe('ids that polebook derives must stay unique', () => {
 });
 
 describe('plausibility of arm geometry', () => {
-  it('an arm drooping below the pole base loads with a warning at its rise (tip 24 - 36 sin 60 deg = -7.18 ft)', () => {
-    const text = swap(SIGN, 'rise: 0 deg           # horizontal arm', 'rise: -60 deg');
+  it('an arm drooping below the pole base loads with a warning at its rise (tip 24 - 36 sin 45 deg = -1.456 ft)', () => {
+    const text = swap(SIGN, 'rise: 0 deg           # horizontal arm', 'rise: -45 deg');
     const { warnings } = loadDesignText(text, 'x.yaml', {});
     expect(warnings.map((w) => w.path)).toEqual(['structure.arms[0].rise']);
-    expect(warnings[0]!.message).toContain('7.177 ft below the pole base'); // 36 x sin 60 deg - 24 = 7.1769 ft
-    expect({ line: warnings[0]!.line, col: warnings[0]!.col }).toEqual(where(text, '-60 deg'));
+    expect(warnings[0]!.message).toContain('1.456 ft below the pole base'); // 36 x sin 45 deg - 24 = 1.4558 ft
+    expect({ line: warnings[0]!.line, col: warnings[0]!.col }).toEqual(where(text, '-45 deg'));
   });
 
   it('a drooping arm whose tip stays above the base gives no warning', () => {

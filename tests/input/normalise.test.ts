@@ -81,9 +81,15 @@ describe('wind directions', () => {
     expect(d.wind.directions.map((w) => Math.round(w.angle_rad / DEG))).toEqual([30, 120, 300, 45]);
   });
   it('an added angle equal to an automatic one is not analysed twice', () => {
-    const text = swap(SIGN, 'add: [45 deg]', 'add: [45 deg, 90, "-270 deg", 405 deg]');
+    const text = swap(SIGN, 'add: [45 deg]', 'add: [45 deg, 90, 45.0000001 deg]');
     const d = loadDesignText(text, 'x.yaml', {}).design;
     expect(d.wind.directions).toHaveLength(4);
+  });
+  it('an added angle outside 0 to 360 deg is refused, not wrapped around', () => {
+    for (const bad of ['"-270 deg"', '405 deg', '360 deg']) {
+      const text = swap(SIGN, 'add: [45 deg]', `add: [45 deg, ${bad}]`);
+      expect(() => loadDesignText(text, 'x.yaml', {})).toThrow(/outside 0 to 360 deg/);
+    }
   });
   it('a pole panel takes its own face direction', () => {
     const d = loadDesignFile('examples/luminaire-twin.yaml').design;
