@@ -8,6 +8,8 @@ import type { UnitSystem } from '../units/units.ts';
 import { normalise } from './normalise.ts';
 import { plausibilityWarnings } from './plausibility.ts';
 import { readInputBytes } from './read-input-file.ts';
+import { jsonSyntaxError } from './json-syntax.ts';
+import { mergeKeyProblems } from './merge-keys.ts';
 import { decodeInput, sizeProblem, unsafeTextProblems } from './input-text.ts';
 import { locate } from './positions.ts';
 import { textPath } from './text-path.ts';
@@ -58,13 +60,13 @@ function loadFromText(original: string, file: string, hash: string, env: LoadEnv
   const tagProblems = doc.warnings.filter((w) => w.code === 'TAG_RESOLVE_FAILED');
   const yamlProblems = [...doc.errors, ...tagProblems];
   if (yamlProblems.length > 0) {
-    throw new InputError(uniquePlaces(sortByPlace(yamlProblems.map((e) => yamlErrorDiagnostic(e, text, lines, file)))));
+    throw new InputError(oneTabMessage(uniquePlaces(sortByPlace(yamlProblems.map((e) => yamlErrorDiagnostic(e, text, lines, file))))));
   }
   const data: unknown = toData(doc, text, lines, file);
   if (data === null || data === undefined) {
     throw new InputError([{ file, line: 1, col: 1, path: '', message: 'the file is empty; expected an input starting with formatVersion: 1 (`polebook new <kind>` writes a starter)', severity: 'error' }]);
   }
-  const unsafe = unsafeTextProblems(data);
+  const unsafe = [...unsafeTextProblems(data), ...mergeKeyProblems(data)];
   if (unsafe.length > 0) throw new InputError(sortByPlace(unsafe.map(toDiagnostic)));
   const system: UnitSystem = isRecord(data) && data.units === 'si' ? 'si' : 'us';
   const schema = schemaFor(system);
@@ -104,19 +106,12 @@ function toData(doc: Document.Parsed, text: string, lines: LineCounter, file: st
   }
 }
 
-/** A .json file is held to JSON's own rules (no trailing commas, no comments). */
+/** A .json file is held to JSON's own rules (no trailing commas, no comments), located exactly. */
 function strictJsonDiagnostic(text: string, lines: LineCounter, file: string): Diagnostic | undefined {
-  try {
-    JSON.parse(text);
-    return undefined;
-  } catch (e) {
-    const message = (e as Error).message;
-    const at = / at position (\d+)/.exec(message);
-    const offset = at ? Number(at[1]) : 0;
-    const pos = lines.linePos(offset);
-    const what = message.replace(/ in JSON at position \d+.*$/, '').replace(/^Unexpected token (.*), ".*" is not valid JSON$/, 'Unexpected token $1');
-    return { file, line: pos.line, col: pos.col, path: formatPath(textPath(text, offset)), message: `not valid JSON: ${what}`, severity: 'error' };
-  }
+  const e = jsonSyntaxError(text);
+  if (!e) return undefined;
+  const pos = lines.linePos(e.offset);
+  return { file, line: pos.line, col: pos.col, path: formatPath(textPath(text, e.offset)), message: `not valid JSON: ${e.message}`, severity: 'error' };
 }
 
 /** "unknown key 'load', did you mean 'loads'" already explains "loads is missing": keep one message. */
@@ -156,9 +151,25 @@ function yamlErrorDiagnostic(e: { message: string; pos: [number, number]; code: 
   // yaml's message ends with a code excerpt after the first line; keep the first line.
   const raw = e.message.split('\n')[0].replace(/ at line \d+, column \d+:?$/, '');
   // The parser runs out of stack on brackets nested a thousand deep: say what that means.
-  const first = /Maximum call stack size exceeded/.test(raw) ? 'the value is nested too deeply to read (lists or blocks inside each other)' : raw;
+  const first = /Maximum call stack size exceeded/.test(raw)
+    ? 'the value is nested too deeply to read (lists or blocks inside each other)'
+    : e.code === 'MULTIPLE_DOCS'
+      ? "the file holds more than one YAML document: a line '---' (or '...') after the first design starts another; polebook reads one design per file, so remove the line or split the file"
+      : raw;
   const hint = YAML_HINTS[e.code] ?? '';
   return { file, line: start.line, col: start.col, path: formatPath(textPath(text, offset, nextLine)), message: `${first}${hint}`, severity: 'error' };
+}
+
+const TAB_MARK = 'indent with spaces, not tabs';
+
+/** Tabs in the indentation throw the structure off, and yaml then reports correct lines too:
+ * one message for the tabs, naming every line that has one, and nothing else. */
+function oneTabMessage(ds: Diagnostic[]): Diagnostic[] {
+  const tabs = ds.filter((d) => d.message.includes(TAB_MARK));
+  if (tabs.length === 0) return ds;
+  const first = tabs[0]!;
+  const more = tabs.slice(1).map((d) => d.line);
+  return [{ ...first, message: `a tab is used for indentation${more.length > 0 ? ` (also on line${more.length > 1 ? 's' : ''} ${more.join(', ')})` : ''}; ${TAB_MARK} (other errors are not listed: the tabs change how the lines nest)` }];
 }
 
 function uniquePlaces(ds: Diagnostic[]): Diagnostic[] {

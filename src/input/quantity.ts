@@ -49,6 +49,8 @@ export function quantityProblem(raw: number | string, dim: Dim, system: UnitSyst
   if (r.ok) return `'${String(raw)}' is too large to be ${withArticle(DIM_NAMES[dim])}; expected a finite number, e.g. "${example(dim, system)}"`;
   const expected = uniq(unitSymbols(dim)).join(', ');
   const name = DIM_NAMES[dim];
+  const comma = typeof raw === 'string' ? /^\s*([-+]?\d+),(\d+)(.*)$/.exec(raw) : null;
+  if (comma) return `'${escapeUnsafe(raw as string)}' has a decimal comma; write ${comma[1]}.${comma[2]}${comma[3]} with a decimal point`;
   if (r.reason === 'syntax') {
     return `cannot read '${String(raw)}' as ${withArticle(name)}; expected a number (in ${SYSTEM_UNIT[system][dim]}) or a number with a unit, e.g. "${example(dim, system)}"`;
   }
