@@ -18,6 +18,7 @@ import { packageRoot } from '../src/package-root.ts';
 import { scalingTable } from './scaling.ts';
 import { fmtTiming, summarise, type Timing } from './timing.ts';
 import { printCalculixComparison } from './calculix-compare.ts';
+import { printRefusalTiming } from './refusal-timing.ts';
 
 const RUNS = 41;
 const WARMUP = 5;
@@ -147,5 +148,7 @@ console.log(
     `${top.p25_ms.toFixed(1)}x-${top.p75_ms.toFixed(1)}x). Target: no more than about 25x: ` +
     `${top.p75_ms <= 25 ? 'met' : top.median_ms <= 25 ? 'met at the median' : 'NOT MET'}.`,
 );
+
+printRefusalTiming();
 
 await printCalculixComparison();

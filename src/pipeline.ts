@@ -15,6 +15,7 @@ import { runChecks } from './checks/run-checks.ts';
 import type { CheckResults } from './checks/check-types.ts';
 import { checkSummaryLines } from './checks/check-summary.ts';
 import { checkSections } from './report/sections/check-sections.ts';
+import { assertPrintable } from './printable-input.ts';
 
 export interface BuildOptions {
   readonly env?: Readonly<Record<string, string | undefined>>;
@@ -37,6 +38,7 @@ export interface PackageResult {
 
 export async function buildPackage(file: string, opts: BuildOptions = {}): Promise<PackageResult> {
   const loaded = loadDesignFile(file, { SOURCE_DATE_EPOCH: opts.env?.SOURCE_DATE_EPOCH });
+  assertPrintable(loaded);
   const analysis = analyseDesign(loaded.design, { firstOrder: opts.firstOrder });
   const checks = runChecks(loaded.design, analysis);
   const document = buildDocument(loaded, { sections: [...analysisSections(loaded, analysis), ...checkSections(loaded, analysis, checks)], secondOrder: analysis.options.secondOrder, checks });

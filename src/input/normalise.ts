@@ -323,6 +323,8 @@ function resultSizeProblems(input: DesignInput, directions: number, combinations
     return [error(where, `${combinations.length} combinations with ${directions} wind directions make ${analyses} analyses, more than the ${MAX_ANALYSES} polebook runs in one build (a limit of ours; a design needs a few dozen): use fewer wind directions or combinations`)];
   }
   const members = [input.structure.pole.height, ...(input.structure.arms ?? []).map((a) => a.length)];
+  // A spacing past the per-member limit is reported by buildAnalysis already.
+  if (members.some((L) => L / analysis.stationSpacing_m > MAX_STATIONS_PER_MEMBER * (1 + 1e-9))) return [];
   const stations = members.reduce((n, L) => n + Math.ceil(L / analysis.stationSpacing_m) + 1, 0);
   if (stations * analyses > MAX_STATION_RESULTS) {
     return [error(['analysis', 'stationSpacing'], `${stations} result stations on ${members.length} members in ${analyses} analyses are ${stations * analyses} station results, more than the ${MAX_STATION_RESULTS} polebook holds (a limit of ours): give a larger stationSpacing (about ${formatQuantity((analysis.stationSpacing_m * stations * analyses) / MAX_STATION_RESULTS, 'length', input.units)} or more) or fewer analyses`)];

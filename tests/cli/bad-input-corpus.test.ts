@@ -34,6 +34,8 @@ describe('bad input through `polebook build`', () => {
       expect(first).toContain(`${file}:${want.line}:${want.col}: ${want.path === '' ? '' : `${want.path}: `}`);
       if (want.messageIncludes) expect(run.stderr).toContain(want.messageIncludes);
       expect(run.stderr).not.toMatch(/at .*\.ts:\d+/); // no stack trace
+      // No raw control character or undecodable byte reaches the terminal.
+      expect(run.stderr).not.toMatch(/[\u0000-\u0008\u000B-\u001F\u007F-\u009F\uFFFD]/);
       expect(readdirSync(out).sort()).toEqual([`${stem}.pdf`]);
       expect(readFileSync(earlier, 'utf8')).toBe('earlier package');
       expect(statSync(earlier).mtimeMs).toBe(before);

@@ -6,12 +6,16 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { inputReferenceMarkdown } from '../../src/input/reference-markdown.ts';
 import { markedSection } from '../../scripts/marked-section.ts';
+import { inputLimitsMarkdown } from '../../src/input/limits-markdown.ts';
 
 const readme = readFileSync(join(import.meta.dirname, '../../README.md'), 'utf8');
 
 describe('README', () => {
   it('holds the input reference generated from the schema (npm run docs refreshes it)', () => {
     expect(markedSection(readme, 'input-reference')).toBe(inputReferenceMarkdown().trim());
+  });
+  it('prints the input limits the input stage enforces (npm run docs refreshes them)', () => {
+    expect(markedSection(readme, 'input-limits')).toBe(inputLimitsMarkdown().trim());
   });
   it('gives the two quick-start commands and the caution', () => {
     expect(readme).toContain('npm ci && npm start');

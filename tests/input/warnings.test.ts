@@ -91,3 +91,22 @@ describe('plausibility warnings', () => {
     }
   });
 });
+
+describe('values that are likely mistakes load with a warning at their key', () => {
+  // Mast arms rise 0 to 15 deg (common practice); above 60 deg an arm is nearly vertical.
+  it('an arm rising 70 deg', () => {
+    const { warnings } = loadDesignText(swap(SIGN, 'rise: 0 deg           # horizontal arm', 'rise: 70 deg'), 'sign.yaml', env);
+    expect(warnings.map((w) => w.path)).toEqual(['structure.arms[0].rise']);
+    expect(warnings[0]!.message).toContain('nearly vertical');
+  });
+  it('two arms at one height and one plan direction', () => {
+    const { warnings } = loadDesignText(swap(TWIN, 'direction: 270 deg', 'direction: 90 deg'), 'twin.yaml', env);
+    expect(warnings.map((w) => w.path)).toEqual(['structure.arms[1].direction']);
+    expect(warnings[0]!.message).toContain('lie on one another');
+  });
+  it('an attachment offset larger than the structure (80 m below a 2.5 m arm on a 10 m pole)', () => {
+    const { warnings } = loadDesignText(swap(TWIN, 'offset: { vertical: -0.08 }   # m', 'offset: { vertical: -80 }   # m'), 'twin.yaml', env);
+    expect(warnings.map((w) => w.path)).toEqual(['attachments.points[0].offset.vertical']);
+    expect(warnings[0]!.message).toContain('larger than the structure itself');
+  });
+});

@@ -6,6 +6,7 @@ import type { Command } from '../run.ts';
 import { loadDesignFile } from '../../input/index.ts';
 import { summariseDesign } from '../../design/summary.ts';
 import { printWarnings } from './print-warnings.ts';
+import { assertPrintable } from '../../printable-input.ts';
 
 const HELP = `Usage: polebook check <input.yaml>
 
@@ -22,6 +23,7 @@ export const checkCommand: Command = {
     const args = parseArgs(argv, { flags: [], values: [] });
     if (args.positionals.length !== 1) throw new UsageError('check takes exactly one input file');
     const loaded = loadDesignFile(resolve(io.cwd, args.positionals[0]!));
+    assertPrintable(loaded);
     printWarnings(loaded.warnings, io);
     io.stdout(summariseDesign(loaded));
     return EXIT.ok;
