@@ -105,7 +105,9 @@ export function quantity(dim: Dim, system: UnitSystem, bound: Bound, text: strin
         return z.NEVER;
       }
       if ((bound === 'positive' && !(si > 0)) || (bound === 'nonNegative' && !(si >= 0))) {
-        ctx.addIssue({ code: 'custom', message: `must be ${boundText(bound)}, got ${String(raw)}` });
+        // Say what the value is (the first sentence of its description), so the limit explains itself.
+        const what = text.split('. ')[0]!.replace(/\.$/, '');
+        ctx.addIssue({ code: 'custom', message: `must be ${boundText(bound)}, got ${String(raw)}: this is the ${what[0]!.toLowerCase()}${what.slice(1)}, which ${bound === 'positive' ? 'is a size or amount above zero' : 'cannot be negative'}` });
         return z.NEVER;
       }
       if (Math.abs(si) > PHYSICAL_LIMIT_SI[dim]) {
