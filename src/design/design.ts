@@ -96,12 +96,17 @@ export interface WindDirection {
   readonly label: string;
 }
 
+export type MemberWindRule = 'projected-area' | 'cross-flow';
+
 export interface WindInput {
   /** Design pressures entered by the user (already include the coefficients they chose). */
   readonly membersPressure_Pa: number;
   readonly panelsPressure_Pa: number;
   readonly pointsPressure_Pa: number;
   readonly directions: readonly WindDirection[];
+  /** How the wind loads an inclined member: 'projected-area' (force p D sin θ in the wind
+   * direction, on the area projected normal to the wind) or 'cross-flow' (p D sin²θ normal to the axis). */
+  readonly memberRule: MemberWindRule;
 }
 
 export interface IceInput {

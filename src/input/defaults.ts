@@ -281,6 +281,12 @@ export const DEFAULTS = {
     value: 1.2,
     source: `from memory: Cd = 1.2 for traffic signal heads (${LTS_MEMORY}, wind drag coefficient table); give 1.0 where the area is an effective projected area (it includes the drag); ${VERIFY}`,
   },
+  memberWindRule: {
+    key: 'loads.wind.memberRule',
+    label: 'Wind on members inclined to the wind: rule',
+    value: 'projected-area',
+    source: 'projected-area practice of the support specifications: the pressure acts on the member area projected onto a plane normal to the wind, in the wind direction (AASHTO LRFD-LTS, from memory; verify against the governing code)',
+  },
   windAuto: {
     key: 'loads.wind.directions.auto',
     label: 'Wind directions found from the geometry (normals to the panel faces and to the main arm, both ways; along the main arm)',

@@ -280,6 +280,7 @@ function buildWind(input: DesignInput, arms: readonly Arm[], attachments: readon
     panelsPressure_Pa: need('panels', attachments.some((a) => a.kind === 'panel')),
     pointsPressure_Pa: need('points', attachments.some((a) => a.kind !== 'panel')),
     directions,
+    memberRule: log.take('memberWindRule', w.memberRule),
   };
 }
 

@@ -113,6 +113,10 @@ function windSchema(system: UnitSystem) {
     panels: p('sign panels'),
     members: p('the pole and arms (on the projected tube diameter)'),
     points: p('point attachments (on their wind area or EPA)'),
+    memberRule: z
+      .enum(['projected-area', 'cross-flow'], { error: () => 'expected projected-area or cross-flow' })
+      .optional()
+      .meta({ description: `How the wind loads a member inclined to it: projected-area (the pressure on the member's area projected onto a plane normal to the wind, acting in the wind direction) or cross-flow (only the wind component normal to the axis, p D sin²θ, acting normal to the axis). ${defaultNote('memberWindRule')}` }),
     directions: z
       .strictObject({
         auto: z.boolean().optional().meta({ description: `Find directions from the geometry. ${defaultNote('windAuto')}` }),

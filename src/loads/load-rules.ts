@@ -3,6 +3,8 @@
 export const RULES = {
   memberWind:
     'cross-flow (normal-component) principle: only the wind component normal to the member axis acts; force per length p D sin²θ (θ = angle between wind and axis), normal to the axis in the plane of the wind and the axis (Hoerner, Fluid-Dynamic Drag, 1965, ch. 3, from memory); verify against the governing code',
+  memberWindProjected:
+    'projected-area rule: the pressure acts on the member area projected onto a plane normal to the wind, D × L sin θ, in the wind direction; force per length p D sin θ (AASHTO LRFD-LTS practice, from memory); verify against the governing code',
   memberWindDiameter: 'pressure × local outside diameter (across flats for multisided), varying linearly along each element',
   panelWind:
     'cosine rule: force normal to the panel face, p × width × height × cos α (α = plan angle between the wind and the face normal); assumption, verify against the governing code',

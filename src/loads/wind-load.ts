@@ -1,5 +1,6 @@
 // Wind load cases from the user's design pressures, one per wind direction.
-// Members: cross-flow principle (see load-rules.ts); panels: cosine rule, force normal to
+// Members: the projected-area rule or the cross-flow principle, as the input chooses (see
+// load-rules.ts); panels: cosine rule, force normal to
 // the face at the panel centroid; point attachments: pressure × effective projected area
 // in the wind direction. Offsets put their moments r × F on the members.
 import { qty, StepCollector } from '../calc/step.ts';
@@ -53,15 +54,18 @@ export function windLoadCase(design: Design, model: FrameModel, dir: WindDirecti
     const cosT = Math.min(1, Math.abs(dot(wdir, ax.direction)));
     const theta = Math.acos(cosT);
     steps.add({ description: `Angle between the wind and the ${name} axis`, symbol: `θ_${ax.id}`, formula: 'cos θ = |ŵ · x̂|', substituted: [`|ŵ · x̂| = ${cosT.toFixed(4)}`], result: qty(theta, 'angle'), source: RULES.memberWind });
-    const s2 = sinT * sinT;
+    const projected = w.memberRule === 'projected-area';
+    // Force per length over p D: sin θ on the projected area, sin²θ for the normal component alone.
+    const s2 = projected ? sinT : sinT * sinT;
+    const rule = projected ? RULES.memberWindProjected : RULES.memberWind;
     const Dr = diameterAt(ax.section, ax.length_m, 0);
     const Dt = diameterAt(ax.section, ax.length_m, ax.length_m);
     for (const [where, D] of [['root', Dr], ['tip', Dt]] as const) {
-      steps.add({ description: `Wind force per length on the ${name} at its ${where}`, symbol: `w_${where}`, formula: 'w = p D sin²θ', substituted: [qty(pm, 'pressure'), ' × ', qty(D, 'section'), ' × sin²(', qty(theta, 'angle'), ')'], result: qty(pm * D * s2, 'lineLoad'), source: `${RULES.memberWind}; ${RULES.memberWindDiameter}` });
+      steps.add({ description: `Wind force per length on the ${name} at its ${where}`, symbol: `w_${where}`, formula: projected ? 'w = p D sin θ' : 'w = p D sin²θ', substituted: [qty(pm, 'pressure'), ' × ', qty(D, 'section'), projected ? ' × sin(' : ' × sin²(', qty(theta, 'angle'), ')'], result: qty(pm * D * s2, 'lineLoad'), source: `${rule}; ${RULES.memberWindDiameter}` });
     }
-    steps.add({ description: `Wind force on the ${name}, normal to its axis`, symbol: `F_${ax.id}`, formula: 'F = L (w_root + w_tip) / 2', substituted: [qty(ax.length_m, 'length'), ' × (', qty(pm * Dr * s2, 'lineLoad'), ' + ', qty(pm * Dt * s2, 'lineLoad'), ') / 2'], result: qty((ax.length_m * pm * s2 * (Dr + Dt)) / 2, 'force'), source: 'integral of a linearly varying load' });
+    steps.add({ description: `Wind force on the ${name}, ${projected ? 'in the wind direction' : 'normal to its axis'}`, symbol: `F_${ax.id}`, formula: 'F = L (w_root + w_tip) / 2', substituted: [qty(ax.length_m, 'length'), ' × (', qty(pm * Dr * s2, 'lineLoad'), ' + ', qty(pm * Dt * s2, 'lineLoad'), ') / 2'], result: qty((ax.length_m * pm * s2 * (Dr + Dt)) / 2, 'force'), source: 'integral of a linearly varying load' });
     if (sinT < PARALLEL_SIN) continue;
-    const direction = scale(n, 1 / sinT);
+    const direction = projected ? wdir : scale(n, 1 / sinT);
     for (const id of info.elements) {
       const el = model.elements[id];
       // The member axis is straight, so each element shares its direction.

@@ -97,6 +97,7 @@ export function makeDesign(over: Partial<Design> = {}): Design {
       membersPressure_Pa: 1200,
       panelsPressure_Pa: 1500,
       pointsPressure_Pa: 1300,
+      memberRule: 'cross-flow',
       directions: [
         { angle_rad: deg(90), label: 'normal to sign face' },
         { angle_rad: 0, label: 'along the arm' },

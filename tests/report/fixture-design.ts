@@ -122,6 +122,7 @@ export const FIXTURE_DESIGN: Design = {
     membersPressure_Pa: 1100,
     panelsPressure_Pa: 1350,
     pointsPressure_Pa: 1350,
+    memberRule: 'projected-area',
     directions: [
       { angle_rad: 90 * DEG, label: 'normal to sign face' },
       { angle_rad: 270 * DEG, label: 'normal to sign face, reversed' },

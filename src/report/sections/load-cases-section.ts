@@ -16,7 +16,8 @@ import { vecText } from './vector-text.ts';
 export const LOAD_CASES_TITLE = 'Loads';
 
 const RULE_LABEL: Readonly<Record<keyof typeof LOAD_RULES, string>> = {
-  memberWind: 'Wind on members',
+  memberWind: 'Wind on members (cross-flow rule, loads.wind.memberRule)',
+  memberWindProjected: 'Wind on members (projected-area rule, loads.wind.memberRule)',
   memberWindDiameter: 'Projected width of members',
   panelWind: 'Wind on sign panels',
   pointWind: 'Wind on point attachments',
@@ -55,7 +56,10 @@ export function loadCasesSection(loaded: LoadedDesign, analysis: DesignAnalysis)
     header: ['Rule', 'Statement and source'],
     widths: [110, '*'],
     rows: [
-      ...(Object.keys(RULE_LABEL) as (keyof typeof LOAD_RULES)[]).map((k) => [RULE_LABEL[k], LOAD_RULES[k]]),
+      // Only the member wind rule in use is printed.
+      ...(Object.keys(RULE_LABEL) as (keyof typeof LOAD_RULES)[])
+        .filter((k) => k !== (design.wind.memberRule === 'projected-area' ? 'memberWind' : 'memberWindProjected'))
+        .map((k) => [RULE_LABEL[k], LOAD_RULES[k]]),
       ...(design.fatigue ? (Object.keys(FATIGUE_RULE_LABEL) as (keyof typeof FATIGUE_RULES)[]).map((k) => [FATIGUE_RULE_LABEL[k], FATIGUE_RULES[k]]) : []),
     ],
   });
