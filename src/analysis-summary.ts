@@ -36,7 +36,7 @@ export function movementWarningLines(design: Design, a: DesignAnalysis): string[
   return worstPerMember(a.model, largeMovements(a.model, a.results)).map((x) => {
     const tip = x.member === 'pole' ? 'pole top' : `${memberName(x.member)} tip`;
     return (
-      `warning: ${tip} moves ${q(x.movement_m, 'section')} under ${x.combination}, ${formatNumber(x.ratio, 3)} of its length ${q(x.length_m, 'length')}, ` +
+      `warning: ${tip} moves ${q(x.movement_m, 'length')} under ${x.combination}, ${formatNumber(x.ratio, 3)} of its length ${q(x.length_m, 'length')}, ` +
       `beyond our limit of L/${formatNumber(1 / SMALL_DISPLACEMENT_LIMIT)} for a small-displacement analysis: its results are outside the method`
     );
   });

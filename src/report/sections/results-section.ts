@@ -1,5 +1,6 @@
 // Section "Analysis results": per combination the iterations, convergence and base moment
-// amplification, the displacements of the pole top and arm tips, the base reactions (factored
+// amplification, the displacements of the pole top and arm tips (with a caution when one moves beyond
+// the small-displacement range), the base reactions (factored
 // and service), the statics check, the envelopes per member and the natural modes.
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { CombinationResult, EnvelopeComponent } from '../../analysis/analysis-types.ts';
@@ -102,17 +103,19 @@ function largeMovementBlocks(analysis: DesignAnalysis, d: Display): Block[] {
     const others = all.filter((y) => y.member === x.member).length - 1;
     const tip = x.member === 'pole' ? 'The pole top' : `The tip of ${memberText(x.member)}`;
     return (
-      `${tip} moves ${d.q(x.movement_m, 'section')} under combination ${x.combination}, ${formatNumber(x.ratio, 3)} of the member length L = ${d.q(x.length_m, 'length')}` +
+      `${tip} moves ${d.q(x.movement_m, 'length')} under combination ${x.combination}, ${formatNumber(x.ratio, 3)} of the member length L = ${d.q(x.length_m, 'length')}` +
       (others > 0 ? ` (beyond ${limit} under ${others} other combination${others === 1 ? '' : 's'} as well).` : '.')
     );
   });
+  const method = analysis.options.secondOrder ? 'this second-order (P-delta) analysis' : 'this first-order analysis';
   return [
     {
       kind: 'caution',
       title: 'Results outside the small-displacement analysis',
       text:
-        `${lines.join('\n')}\n\n` +
-        `These movements exceed ${limit}, a limit of ours (common practice): beyond about a tenth of the length the small-displacement, small-rotation assumption of the analysis, P-delta included, no longer holds. ` +
+        `${lines.join('\n\n')}\n\n` +
+        'Movement: the total translation of the pole top or of the arm tip, for an arm with what it has with the pole. ' +
+        `These movements exceed ${limit}, a limit of ours (common practice): beyond about a tenth of the length the small-displacement, small-rotation assumption of ${method} no longer holds. ` +
         'The forces, moments and checks of this package under these combinations are outside the method and are not to be relied on: stiffen the structure, or have it analysed by a method for large displacements.',
     },
   ];
