@@ -38,6 +38,7 @@ describe('results outside the small-displacement method, through polebook build'
     expect(r.pdf).not.toBeNull();
     // the PDF text with white space removed (the layout wraps lines)
     expect(r.pdf!).toContain('Resultsoutsidethesmall-displacementanalysis');
+    expect(r.pdf!).toContain('Checksonresultsoutsidethesmall-displacementanalysis');
     expect(r.pdf!).toMatch(/ThetipofarmSAmoves[\d.]+ftundercombinationext-[^,]+,[\d.]+ofthememberlengthL=45ft/);
   }, 60_000);
 

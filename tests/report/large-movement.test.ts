@@ -8,6 +8,8 @@ import { largeMovements } from '../../src/analysis/displacement-range.ts';
 import type { Design, LoadedDesign } from '../../src/design/design.ts';
 import { resultsSection } from '../../src/report/sections/results-section.ts';
 import { makeDesign } from '../model/design-factory.ts';
+import { checkSections } from '../../src/report/sections/check-sections.ts';
+import { runChecks } from '../../src/checks/run-checks.ts';
 
 const loadedOf = (design: Design): LoadedDesign => ({ design, file: 'test.yaml', text: '', inputHash: '000000000000', warnings: [] });
 const soft = makeDesign({ material: { E_Pa: 5e9, G_Pa: 1.9e9, Fy_Pa: 345e6, density_kgm3: 7850 } });
@@ -34,6 +36,10 @@ describe('results outside the small-displacement method', () => {
     expect(line).toMatch(/ of its length 9 m, beyond our limit of L\/10 for a small-displacement analysis/);
     // one line per member, at its worst combination
     expect(lines.filter((l) => l.includes('arm A1 tip'))).toHaveLength(1);
+    // the design checks say that they rest on these results
+    const checks = checkSections(loadedOf(soft), a, runChecks(soft, a))[0]!.blocks.filter((b) => b.kind === 'caution');
+    expect(checks.map((b) => (b.kind === 'caution' ? b.title : ''))).toEqual(['Checks on results outside the small-displacement analysis']);
+    expect(checks[0]!.kind === 'caution' && checks[0]!.text).toContain(worst.combination);
   });
 
   it('the same design in real steel gives no warning', () => {
@@ -42,5 +48,6 @@ describe('results outside the small-displacement method', () => {
     expect(largeMovements(a.model, a.results)).toEqual([]);
     expect(movementWarningLines(design, a)).toEqual([]);
     expect(cautionsOf(design)).toEqual([]);
+    expect(checkSections(loadedOf(design), a, runChecks(design, a))[0]!.blocks.filter((b) => b.kind === 'caution' && b.title.includes('small-displacement'))).toEqual([]);
   });
 });
