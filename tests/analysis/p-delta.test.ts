@@ -103,6 +103,22 @@ describe('amplified cantilever (Timoshenko & Gere; AISC 360 Commentary C2 benchm
     expect(err.message).toContain('the buckling mode moves most on pole, 8 m above base');
   });
 
+  it('an iteration that does not converge (2 solutions allowed at P = 0.97 Pcr) names the combination and the free top', () => {
+    const { model, cases, combo } = column(0.97 * Pcr);
+    let caught: unknown = null;
+    try {
+      analyzeCombination(model, cases, combo, { ...opts, maxIterations: 2 });
+    } catch (e) {
+      caught = e;
+    }
+    expect(caught).toBeInstanceOf(UnstableStructureError);
+    const err = caught as UnstableStructureError;
+    expect(err.message).toMatch(/^combination test-combo: the second-order analysis did not converge in 2 iterations/);
+    // fixed-free column mode 1 - cos(pi z / 2L) (Timoshenko & Gere, as above): largest at z = L
+    expect(err.detail.place).toEqual({ member: 'pole', s_m: L });
+    expect(err.message).toContain('; the buckling mode moves most on pole, 8 m above base');
+  });
+
   it('just below the critical load (P = 0.97 Pcr) still converges, with amplification about 1/(1 - P/Pcr)', () => {
     const P = 0.97 * Pcr;
     const { model, cases, combo } = column(P);
