@@ -8,6 +8,8 @@ import { buildFrame } from './model/build-frame.ts';
 import { buildLoadCases, expandCombinations } from './loads/index.ts';
 import { analyzeAll } from './analysis/analyze.ts';
 import { modalAnalysis } from './analysis/modal.ts';
+import { placeText } from './analysis/buckling-place.ts';
+import { UnstableStructureError } from './errors.ts';
 
 export interface DesignAnalysis {
   readonly model: FrameModel;
@@ -31,7 +33,19 @@ export function analyseDesign(design: Design, opts: { readonly firstOrder?: bool
     maxIterations: design.analysis.pDeltaMaxIterations,
     stationSpacing_m: design.analysis.stationSpacing_m,
   };
-  const results = analyzeAll(model, cases, combinations, options);
+  const results = inUserUnits(design, () => analyzeAll(model, cases, combinations, options));
   const modes = modalAnalysis(model, MODES_REPORTED);
   return { model, cases, combinations, options, results, modes };
+}
+
+/** The analysis prints the place of a buckling mode in metres; the user reads it in the units of the input. */
+function inUserUnits<T>(design: Design, run: () => T): T {
+  try {
+    return run();
+  } catch (err) {
+    const place = err instanceof UnstableStructureError ? err.detail.place : undefined;
+    if (!place || design.units === 'si') throw err;
+    const message = (err as Error).message.replace(placeText(place, 'si'), placeText(place, design.units));
+    throw new UnstableStructureError(message, (err as UnstableStructureError).detail);
+  }
 }

@@ -4,6 +4,8 @@ import type { DesignAnalysis } from './analyse-design.ts';
 import { envelope, resultsOf } from './analysis/envelope.ts';
 import { isFactored } from './design/combination-use.ts';
 import { formatQuantity, formatNumber } from './units/units.ts';
+import { largeMovements, SMALL_DISPLACEMENT_LIMIT, worstPerMember } from './analysis/displacement-range.ts';
+import { memberName } from './design/member-names.ts';
 
 export function analysisSummaryLines(design: Design, a: DesignAnalysis): string[] {
   const q = (si: number, dim: Parameters<typeof formatQuantity>[1]) => formatQuantity(si, dim, design.units);
@@ -26,4 +28,16 @@ export function analysisSummaryLines(design: Design, a: DesignAnalysis): string[
   lines.push(`  statics check: largest relative residual, forces ${worstForce.toExponential(1)}, moments ${worstMoment.toExponential(1)}${a.options.secondOrder ? ' (deformed configuration; see the package for the moment residual of the P-delta method)' : ''}`);
   if (a.modes.length > 0) lines.push(`  first natural frequency ${formatNumber(a.modes[0]!.frequency_Hz, 3)} Hz`);
   return lines;
+}
+
+/** One warning per member whose tip moves beyond the small-displacement range, at its worst combination. */
+export function movementWarningLines(design: Design, a: DesignAnalysis): string[] {
+  const q = (si: number, dim: Parameters<typeof formatQuantity>[1]) => formatQuantity(si, dim, design.units);
+  return worstPerMember(a.model, largeMovements(a.model, a.results)).map((x) => {
+    const tip = x.member === 'pole' ? 'pole top' : `${memberName(x.member)} tip`;
+    return (
+      `warning: ${tip} moves ${q(x.movement_m, 'length')} under ${x.combination}, ${formatNumber(x.ratio, 3)} of its length ${q(x.length_m, 'length')}, ` +
+      `beyond our limit of L/${formatNumber(1 / SMALL_DISPLACEMENT_LIMIT)} for a small-displacement analysis: its results are outside the method`
+    );
+  });
 }

@@ -48,7 +48,13 @@ export class InputError extends PolebookError {
 export class UnstableStructureError extends PolebookError {
   constructor(
     message: string,
-    readonly detail: { combination?: string; node?: number; dof?: string } = {},
+    readonly detail: {
+      combination?: string;
+      node?: number;
+      dof?: string;
+      /** Loss of stability: where the buckling mode moves most (member id, distance from its root). */
+      place?: { readonly member: string; readonly s_m: number };
+    } = {},
   ) {
     super(message, EXIT.unstable);
   }

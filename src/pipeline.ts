@@ -10,7 +10,7 @@ import { renderPdf } from './report/pdf/render-pdf.ts';
 import type { DocumentModel } from './report/document.ts';
 import { resultsJson } from './export/results-json.ts';
 import { toolVersion } from './version.ts';
-import { analysisSummaryLines } from './analysis-summary.ts';
+import { analysisSummaryLines, movementWarningLines } from './analysis-summary.ts';
 import { runChecks } from './checks/run-checks.ts';
 import type { CheckResults } from './checks/check-types.ts';
 import { checkSummaryLines } from './checks/check-summary.ts';
@@ -33,6 +33,8 @@ export interface PackageResult {
   readonly json: string | null;
   /** Lines for the terminal. */
   readonly summary: readonly string[];
+  /** Warnings about the results for the terminal (results outside the method). */
+  readonly resultWarnings: readonly string[];
   readonly checksFail: boolean;
 }
 
@@ -47,5 +49,6 @@ export async function buildPackage(file: string, opts: BuildOptions = {}): Promi
     ? resultsJson({ loaded, toolVersion: toolVersion(), ...analysis, secondOrder: analysis.options.secondOrder, checks })
     : null;
   const summary = [...analysisSummaryLines(loaded.design, analysis), ...checkSummaryLines(loaded.design, checks)];
-  return { loaded, analysis, checks, document, pdf, json, summary, checksFail: checks.fails };
+  const resultWarnings = movementWarningLines(loaded.design, analysis);
+  return { loaded, analysis, checks, document, pdf, json, summary, resultWarnings, checksFail: checks.fails };
 }

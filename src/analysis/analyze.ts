@@ -33,6 +33,7 @@ import {
 } from './frame-system.ts';
 import { memberStations, type ElementState } from './member-stations.ts';
 import { staticsCheck } from './statics-check.ts';
+import { bucklingPlace, placeText } from './buckling-place.ts';
 
 /** A prepared model with its factorised linear stiffness, shared by all combinations. */
 interface Solver {
@@ -139,6 +140,20 @@ function solution(prep: PreparedModel, ls: LoadSet, st: State, spacing_m: number
   };
 }
 
+/** Loss of stability: the message and detail with the member and place where the first buckling mode
+ * of the axial forces N moves most (in metres; analyse-design.ts prints it in the user's units). */
+function withBucklingPlace(
+  solver: Solver,
+  message: string,
+  detail: UnstableStructureError['detail'],
+  N: Float64Array,
+  u: ArrayLike<number>,
+): UnstableStructureError {
+  const place = bucklingPlace(solver.prep, linearFactor(solver, detail.combination), N, u);
+  if (!place) return new UnstableStructureError(message, detail);
+  return new UnstableStructureError(`${message}; ${placeText(place, 'si')}`, { ...detail, place });
+}
+
 function runCombination(solver: Solver, loads: readonly FactoredLoad[], opts: AnalysisOptions, id: string): CombinationResult {
   const { prep } = solver;
   const ls = buildLoadSet(prep, loads);
@@ -158,7 +173,12 @@ function runCombination(solver: Solver, loads: readonly FactoredLoad[], opts: An
     let converged = false;
     while (iterations < opts.maxIterations) {
       const K = workMatrix(solver, N);
-      factorOrThrow(prep, K, id, true);
+      try {
+        factorOrThrow(prep, K, id, true);
+      } catch (err) {
+        if (!(err instanceof UnstableStructureError)) throw err;
+        throw withBucklingPlace(solver, err.message, err.detail, N, uPrev);
+      }
       const u = K.solve(F);
       iterations++;
       let diff = 0;
@@ -174,11 +194,14 @@ function runCombination(solver: Solver, loads: readonly FactoredLoad[], opts: An
       }
     }
     if (!converged) {
-      throw new UnstableStructureError(
+      throw withBucklingPlace(
+        solver,
         `combination ${id}: the second-order analysis did not converge in ${opts.maxIterations} iterations ` +
           `(last relative change of displacements ${change.toExponential(3)}, tolerance ${opts.tolerance}); ` +
           'the axial loads are at or near a buckling load',
         { combination: id },
+        N,
+        uPrev,
       );
     }
     // Member forces use the axial forces that built the matrix the displacements solve.

@@ -213,7 +213,8 @@ export function assemble(prep: PreparedModel, axialN: Float64Array | null, targe
   return K;
 }
 
-/** Factorises K; a vanishing or negative pivot becomes an UnstableStructureError naming the dof. */
+/** Factorises K; a vanishing or negative pivot becomes an UnstableStructureError naming the dof of a
+ * mechanism (first order); for loss of stability the dof is arbitrary and analyze.ts adds the place. */
 export function factorOrThrow(prep: PreparedModel, K: BandedMatrix, combination: string | undefined, secondOrder: boolean): void {
   try {
     K.factor();
@@ -223,7 +224,7 @@ export function factorOrThrow(prep: PreparedModel, K: BandedMatrix, combination:
     const label = dofLabel(prep.model, dof);
     const where = combination ? `combination ${combination}: ` : '';
     const why = secondOrder
-      ? `loss of stability in the second-order analysis: the stiffness with geometric stiffness (K + Kg) is not positive definite at ${label} (pivot ${err.pivot.toExponential(3)}, diagonal ${err.diagonal.toExponential(3)}); the axial loads reach a buckling load`
+      ? 'loss of stability in the second-order analysis: the stiffness with geometric stiffness (K + Kg) is not positive definite; the axial loads reach a buckling load'
       : `the structure is a mechanism or is not supported: no stiffness against ${label} (pivot ${err.pivot.toExponential(3)}, diagonal ${err.diagonal.toExponential(3)})`;
     throw new UnstableStructureError(`${where}${why}`, {
       combination,

@@ -10,6 +10,7 @@ import { scaleLoad } from '../loads/scale-load.ts';
 import { combinedLoads } from '../analysis/analyze.ts';
 import type { CheckRecord, CheckResults } from '../checks/check-types.ts';
 import { verdictByType } from '../checks/verdict.ts';
+import { largeMovements, SMALL_DISPLACEMENT_LIMIT } from '../analysis/displacement-range.ts';
 import type { Dim } from '../units/units.ts';
 
 export const RESULTS_FORMAT = 'polebook-results';
@@ -112,7 +113,15 @@ export function resultsJson(input: ResultsJsonInput): string {
     units: { length: 'm', force: 'N', moment: 'N*m', stress: 'Pa', angle: 'rad', mass: 'kg', frequency: 'Hz', note: 'SI base units throughout; each key names its unit' },
     columns: COLUMNS,
     caution: 'Draft results for review by a licensed engineer; they defer to the governing codes.',
-    analysis: { secondOrder: input.secondOrder, method: 'direct stiffness, 3D Euler-Bernoulli frame elements, rigid end offsets; second order by geometric stiffness iterated on the combined loads' },
+    analysis: {
+      secondOrder: input.secondOrder,
+      method: 'direct stiffness, 3D Euler-Bernoulli frame elements, rigid end offsets; second order by geometric stiffness iterated on the combined loads',
+      outsideMethod: {
+        limitRatio: SMALL_DISPLACEMENT_LIMIT,
+        note: 'Pole top and arm tips whose total translation exceeds limitRatio x their member length, per combination: beyond it the small-displacement, small-rotation assumption no longer holds (a limit of ours, common practice) and the results of that combination are outside the method.',
+        movements: largeMovements(model, results).map((x) => ({ member: x.member, combination: x.combination, movement_m: x.movement_m, length_m: x.length_m, ratio: x.ratio })),
+      },
+    },
     model: modelRecord(model),
     loadCases: cases.map((c) => ({ id: c.id, kind: c.kind, description: c.description, windAngle_rad: c.windAngle_rad, loads: c.loads.map(loadRecord) })),
     combinations: combinations.map((c) => ({

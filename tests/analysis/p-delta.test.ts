@@ -97,6 +97,26 @@ describe('amplified cantilever (Timoshenko & Gere; AISC 360 Commentary C2 benchm
     expect(err.message).toContain('test-combo');
     expect(err.detail.combination).toBe('test-combo');
     expect(err.exitCode).toBe(3);
+    // The first buckling mode of a fixed-free column, 1 - cos(pi z / 2L) (Timoshenko & Gere,
+    // Theory of Elastic Stability, section 2.1), moves most at the free top, z = L.
+    expect(err.detail.place).toEqual({ member: 'pole', s_m: L });
+    expect(err.message).toContain('the buckling mode moves most on pole, 8 m above base');
+  });
+
+  it('an iteration that does not converge (2 solutions allowed at P = 0.97 Pcr) names the combination and the free top', () => {
+    const { model, cases, combo } = column(0.97 * Pcr);
+    let caught: unknown = null;
+    try {
+      analyzeCombination(model, cases, combo, { ...opts, maxIterations: 2 });
+    } catch (e) {
+      caught = e;
+    }
+    expect(caught).toBeInstanceOf(UnstableStructureError);
+    const err = caught as UnstableStructureError;
+    expect(err.message).toMatch(/^combination test-combo: the second-order analysis did not converge in 2 iterations/);
+    // fixed-free column mode 1 - cos(pi z / 2L) (Timoshenko & Gere, as above): largest at z = L
+    expect(err.detail.place).toEqual({ member: 'pole', s_m: L });
+    expect(err.message).toContain('; the buckling mode moves most on pole, 8 m above base');
   });
 
   it('just below the critical load (P = 0.97 Pcr) still converges, with amplification about 1/(1 - P/Pcr)', () => {
@@ -106,5 +126,54 @@ describe('amplified cantilever (Timoshenko & Gere; AISC 360 Commentary C2 benchm
     const alpha = Math.sqrt((P * L ** 2) / EI);
     // Timoshenko & Gere closed form again; tolerance 1 % this close to Pcr
     expect(Math.abs(r.baseMoment!.amplification! - Math.tan(alpha) / alpha) / (Math.tan(alpha) / alpha)).toBeLessThan(0.01);
+  });
+});
+
+describe('the place a lost stability is reported at: the largest movement of the buckling mode', () => {
+  // Column fixed at the base and held laterally at the top (fixed-hinged). Its first buckling mode
+  // (Timoshenko & Gere, Theory of Elastic Stability, 2nd ed., chapter 2, column with one end built in
+  // and the other hinged; from memory): tan(kL) = kL, kL = 4.4934, Pcr = (kL)² EI / L², shape
+  // w(x) = sin kx - kL cos kx - kx + kL, largest where w' = 0: cos kx + kL sin kx = 1, near x = 0.6 L.
+  // A lateral load at a quarter of the height moves the column most lower down, so the place comes
+  // from the mode and not from the displacements. The place is a node: within one element, L/24.
+  it('names the pole and the height of the mode maximum, not the top or the loaded node', () => {
+    const kL = 4.4934;
+    const PcrFH = (kL ** 2 * EI) / L ** 2;
+    const b = new FrameBuilder();
+    const b0 = b.node([0, 0, 0], 'base');
+    b.fix(b0);
+    const ids = b.member('pole', 'pole', b0, [0, 0, L], 24, () => sec, { tipTag: 'pole-top' });
+    const top = ids[ids.length - 1];
+    b.supports.push({ node: top, fixed: [true, true, false, false, false, false], springs: [0, 0, 0, 0, 0, 0] });
+    const quarter = ids[6];
+    const cases: LoadCase[] = [
+      { id: 'gravity', kind: 'dead', description: 'axial', windAngle_rad: null, loads: [nodal(top, [0, 0, -1.1 * PcrFH])], steps: [] },
+      { id: 'lateral', kind: 'wind', description: 'lateral', windAngle_rad: 0, loads: [nodal(quarter, [H, 0, 0])], steps: [] },
+    ];
+    const combo: Combination = {
+      id: 'held-top', specId: 'test', category: 'strength', description: 'P + H', source: 'test',
+      factors: [{ caseId: 'gravity', factor: 1 }, { caseId: 'lateral', factor: 1 }],
+    };
+    // x of the mode maximum by bisection of cos kx + kL sin kx - 1 on (0.3 L, 0.9 L)
+    const g = (x: number) => Math.cos((kL * x) / L) + kL * Math.sin((kL * x) / L) - 1;
+    let lo = 0.3 * L;
+    let hi = 0.9 * L;
+    for (let k = 0; k < 60; k++) {
+      const mid = (lo + hi) / 2;
+      if (Math.sign(g(mid)) === Math.sign(g(lo))) lo = mid;
+      else hi = mid;
+    }
+    let caught: unknown = null;
+    try {
+      analyzeCombination(b.build(), cases, combo, opts);
+    } catch (e) {
+      caught = e;
+    }
+    expect(caught).toBeInstanceOf(UnstableStructureError);
+    const err = caught as UnstableStructureError;
+    expect(err.detail.place?.member).toBe('pole');
+    expect(Math.abs(err.detail.place!.s_m - lo)).toBeLessThanOrEqual(L / 24 + 1e-9);
+    expect(err.message).toMatch(/^combination held-top: .*the buckling mode moves most on pole, [\d.]+ m above base$/);
+    expect(err.exitCode).toBe(3);
   });
 });

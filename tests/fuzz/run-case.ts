@@ -10,7 +10,7 @@ import { buildDocument } from '../../src/report/sections/build-document.ts';
 import { analysisSections } from '../../src/report/sections/analysis-sections.ts';
 import { runChecks } from '../../src/checks/run-checks.ts';
 import { resultsJson } from '../../src/export/results-json.ts';
-import { analysisSummaryLines } from '../../src/analysis-summary.ts';
+import { analysisSummaryLines, movementWarningLines } from '../../src/analysis-summary.ts';
 import { InputError, UnstableStructureError, formatDiagnostic } from '../../src/errors.ts';
 import { cli } from '../cli/run-cli.ts';
 import { readPdf } from '../report/pdf-tools.ts';
@@ -103,6 +103,7 @@ export function runLibrary(text: string, file: string): Outcome {
       ...nonFinite({ results: analysis.results, modes: analysis.modes, model: analysis.model }, { text: scanText }),
       ...nonFinite(buildDocument(loaded, { sections: analysisSections(loaded, analysis) }), { text: scanText }),
       ...nonFinite(analysisSummaryLines(loaded.design, analysis), { text: scanText }),
+      ...nonFinite(movementWarningLines(loaded.design, analysis), { text: scanText }),
     ];
     const checks = runChecks(loaded.design, analysis);
     bad.push(...nonFinite(checks.records.map((r) => ({ demand: r.demand.si, capacity: r.capacity.si })), { text: scanText }));

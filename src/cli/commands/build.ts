@@ -51,6 +51,7 @@ export const buildCommand: Command = {
     }
     const paint = painter(io);
     for (const line of result.summary) io.stdout(`${line}\n`);
+    for (const line of result.resultWarnings) io.stderr(`${paint.warn(line)}\n`);
     for (const path of written) io.stdout(`${paint.good('wrote')} ${path}\n`);
     return result.checksFail ? EXIT.checkFails : EXIT.ok;
   },

@@ -6,7 +6,9 @@ import type { CheckRecord, CheckResults } from '../../checks/check-types.ts';
 import { CHECK_TITLES, verdictByType } from '../../checks/verdict.ts';
 import type { LoadedDesign } from '../../design/design.ts';
 import type { Block, DocSection } from '../document.ts';
-import { display, memberText, type Display } from './display.ts';
+import { display, fractionText, memberText, type Display } from './display.ts';
+import { largeMovements, SMALL_DISPLACEMENT_LIMIT } from '../../analysis/displacement-range.ts';
+import { RESULTS_TITLE } from './results-section.ts';
 import { templateBlocks } from './templates.ts';
 
 export const CHECKS_TITLE = 'Design checks';
@@ -32,6 +34,7 @@ export function checkSections(loaded: LoadedDesign, analysis: DesignAnalysis, ch
     rows: verdict.map((v) => [v.title, ratioText(v.worst), STATUS_TEXT[v.worst.status], placeText(v.worst, d), v.worst.combination ?? '—', `${v.count} (${v.failures}, ${v.warnings})`]),
     note: 'Ratio = |demand| / capacity; "not made" when the check cannot be made (it fails, with its reason below).',
   });
+  blocks.push(...outsideMethodBlocks(analysis));
   for (const g of checks.governing) {
     const r = g.record;
     blocks.push({ kind: 'heading', level: 2, text: `${CHECK_TITLES[r.type]}: ${memberText(r.member)}` });
@@ -51,6 +54,21 @@ export function checkSections(loaded: LoadedDesign, analysis: DesignAnalysis, ch
     }
   }
   return [{ id: 'checks', title: CHECKS_TITLE, blocks }];
+}
+
+/** The checks rest on the analysis: say so when some of its results are outside the small-displacement method. */
+function outsideMethodBlocks(analysis: DesignAnalysis): Block[] {
+  const combos = [...new Set(largeMovements(analysis.model, analysis.results).map((x) => x.combination))];
+  if (combos.length === 0) return [];
+  return [
+    {
+      kind: 'caution',
+      title: 'Checks on results outside the small-displacement analysis',
+      text:
+        `A pole top or arm tip moves more than ${fractionText(SMALL_DISPLACEMENT_LIMIT, 'L')} of its member length (section "${RESULTS_TITLE}", caution "Results outside the small-displacement analysis") ` +
+        `under ${combos.length === 1 ? 'combination' : `${combos.length} combinations:`} ${combos.join(', ')}. The checks under ${combos.length === 1 ? 'it' : 'them'} rest on results outside the method, whatever their ratio.`,
+    },
+  ];
 }
 
 const ratioText = (r: CheckRecord): string => (Number.isFinite(r.ratio) ? r.ratio.toFixed(3) : 'not made');

@@ -1,5 +1,6 @@
 // Section "Analysis results": per combination the iterations, convergence and base moment
-// amplification, the displacements of the pole top and arm tips, the base reactions (factored
+// amplification, the displacements of the pole top and arm tips (with a caution when one moves beyond
+// the small-displacement range), the base reactions (factored
 // and service), the statics check, the envelopes per member and the natural modes.
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { CombinationResult, EnvelopeComponent } from '../../analysis/analysis-types.ts';
@@ -10,7 +11,8 @@ import type { FrameModel, Vec3 } from '../../model/frame.ts';
 import { formatNumber } from '../../units/units.ts';
 import type { Block, DocSection } from '../document.ts';
 import { isFactored } from '../../design/combination-use.ts';
-import { display, memberText, type Display } from './display.ts';
+import { display, fractionText, memberText, type Display } from './display.ts';
+import { largeMovements, SMALL_DISPLACEMENT_LIMIT, worstPerMember } from '../../analysis/displacement-range.ts';
 import { templateBlocks } from './templates.ts';
 import { vecText } from './vector-text.ts';
 import { ROUND_OFF, withoutRoundOff } from './round-off.ts';
@@ -87,6 +89,34 @@ function displacementBlocks(loaded: LoadedDesign, analysis: DesignAnalysis, d: D
         return [c.id, h(poleTop), ...arms.flatMap((a) => [d.q(u[a.node][2], 'section'), h(a.node)])];
       }),
       note: 'Horizontal: resultant of the X and Y translations. Vertical: Z translation, positive up, of the member axis, including the movement of the pole. The deflection checks of section "Design checks" read these: the arm tips vertical under the dead-alone service combination, the pole top horizontal under the service combinations (the arm tips horizontal without the movement they have with the pole), the arm tips vertical under the galloping and truck-gust fatigue loads.',
+    },
+    ...largeMovementBlocks(analysis, d),
+  ];
+}
+
+/** A caution when a pole top or arm tip moves beyond the small-displacement range, worst combination per member. */
+function largeMovementBlocks(analysis: DesignAnalysis, d: Display): Block[] {
+  const all = largeMovements(analysis.model, analysis.results);
+  if (all.length === 0) return [];
+  const limit = fractionText(SMALL_DISPLACEMENT_LIMIT, 'L');
+  const lines = worstPerMember(analysis.model, all).map((x) => {
+    const others = all.filter((y) => y.member === x.member).length - 1;
+    const tip = x.member === 'pole' ? 'The pole top' : `The tip of ${memberText(x.member)}`;
+    return (
+      `${tip} moves ${d.q(x.movement_m, 'length')} under combination ${x.combination}, ${formatNumber(x.ratio, 3)} of the member length L = ${d.q(x.length_m, 'length')}` +
+      (others > 0 ? ` (beyond ${limit} under ${others} other combination${others === 1 ? '' : 's'} as well).` : '.')
+    );
+  });
+  const method = analysis.options.secondOrder ? 'this second-order (P-delta) analysis' : 'this first-order analysis';
+  return [
+    {
+      kind: 'caution',
+      title: 'Results outside the small-displacement analysis',
+      text:
+        `${lines.join('\n\n')}\n\n` +
+        'Movement: the total translation of the pole top or of the arm tip, for an arm with what it has with the pole. ' +
+        `These movements exceed ${limit}, a limit of ours (common practice): beyond about a tenth of the length the small-displacement, small-rotation assumption of ${method} no longer holds. ` +
+        'The forces, moments and checks of this package under these combinations are outside the method and are not to be relied on: stiffen the structure, or have it analysed by a method for large displacements.',
     },
   ];
 }
