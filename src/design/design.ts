@@ -98,11 +98,28 @@ export interface WindDirection {
 
 export type MemberWindRule = 'projected-area' | 'cross-flow';
 
+export type Exposure = 'B' | 'C' | 'D';
+
+/** The design pressure from a basic wind speed, P = 0.00256 Kz Kd G V² Cd (see src/loads/wind-coefficients.ts). */
+export interface WindSpeedInput {
+  readonly V_mps: number;
+  /** What V is, as the user states it (map, return period or risk category), printed with it. */
+  readonly basis: string;
+  readonly exposure: Exposure;
+  readonly Kd: number;
+  readonly G: number;
+  /** Factor on V d in the Reynolds-dependent drag of round tubes. */
+  readonly Cv: number;
+}
+
 export interface WindInput {
-  /** Design pressures entered by the user (already include the coefficients they chose). */
-  readonly membersPressure_Pa: number;
-  readonly panelsPressure_Pa: number;
-  readonly pointsPressure_Pa: number;
+  /** Design pressures entered by the user (already include the coefficients they chose); null:
+   * computed from the wind speed for that class, at each height. */
+  readonly membersPressure_Pa: number | null;
+  readonly panelsPressure_Pa: number | null;
+  readonly pointsPressure_Pa: number | null;
+  /** The wind speed path, when given; typed pressures override it class by class. */
+  readonly speed: WindSpeedInput | null;
   readonly directions: readonly WindDirection[];
   /** How the wind loads an inclined member: 'projected-area' (force p D sin θ in the wind
    * direction, on the area projected normal to the wind) or 'cross-flow' (p D sin²θ normal to the axis). */

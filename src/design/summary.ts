@@ -25,7 +25,10 @@ export function summariseDesign(loaded: LoadedDesign): string {
     lines.push(`attachment ${t.id.padEnd(6)} ${what}; ${where}`);
   }
   const w = d.wind;
-  lines.push(`wind       members ${q(w.membersPressure_Pa, 'pressure')}, panels ${q(w.panelsPressure_Pa, 'pressure')}, point attachments ${q(w.pointsPressure_Pa, 'pressure')}`);
+  const fromSpeed = 'from the wind speed';
+  const pq = (p: number | null) => (p === null ? fromSpeed : q(p, 'pressure'));
+  if (w.speed) lines.push(`wind speed ${q(w.speed.V_mps, 'speed')} (${w.speed.basis}), exposure ${w.speed.exposure}, Kd ${formatNumber(w.speed.Kd)}, G ${formatNumber(w.speed.G)}`);
+  lines.push(`wind       members ${pq(w.membersPressure_Pa)}, panels ${pq(w.panelsPressure_Pa)}, point attachments ${pq(w.pointsPressure_Pa)}`);
   lines.push(`directions ${w.directions.map((x) => `${deg(x.angle_rad)} (${x.label})`).join('; ')}`);
   if (d.ice) lines.push(`ice        ${q(d.ice.weightPerArea_Pa, 'pressure')} on all surfaces, wind factor ${formatNumber(d.ice.windFactor)}`);
   for (const c of d.combinations) {

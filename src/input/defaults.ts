@@ -281,6 +281,24 @@ export const DEFAULTS = {
     value: 1.2,
     source: `from memory: Cd = 1.2 for traffic signal heads (${LTS_MEMORY}, wind drag coefficient table); give 1.0 where the area is an effective projected area (it includes the drag); ${VERIFY}`,
   },
+  windKd: {
+    key: 'loads.wind.speed.Kd',
+    label: 'Wind directionality factor Kd',
+    value: 0.95,
+    source: 'typical value for poles and sign supports (AASHTO LRFD-LTS, from memory); verify against the governing code',
+  },
+  windG: {
+    key: 'loads.wind.speed.G',
+    label: 'Wind gust effect factor G',
+    value: 1.14,
+    source: 'AASHTO LRFD-LTS gust effect factor for poles and sign supports, from memory; verify against the governing code',
+  },
+  windCv: {
+    key: 'loads.wind.speed.Cv',
+    label: 'Factor Cv on V d in the drag of round tubes',
+    value: 0.8,
+    source: 'AASHTO LRFD-LTS, from memory; verify against the governing code',
+  },
   memberWindRule: {
     key: 'loads.wind.memberRule',
     label: 'Wind on members inclined to the wind: rule',

@@ -266,10 +266,15 @@ function buildAttachments(input: DesignInput, arms: readonly Arm[], system: Unit
 function buildWind(input: DesignInput, arms: readonly Arm[], attachments: readonly Attachment[], log: AssumptionLog, problems: Problem[]): WindInput {
   const w = input.loads.wind;
   const path: InputPath = ['loads', 'wind'];
-  const need = (key: 'panels' | 'members' | 'points', needed: boolean): number => {
+  const speed = w.speed
+    ? { V_mps: w.speed.V, basis: w.speed.basis, exposure: w.speed.exposure, Kd: log.take('windKd', w.speed.Kd), G: log.take('windG', w.speed.G), Cv: log.take('windCv', w.speed.Cv) }
+    : null;
+  // A typed pressure wins; without one the class takes its pressure from the wind speed (null).
+  const need = (key: 'panels' | 'members' | 'points', needed: boolean): number | null => {
     const v = w[key] ?? w.pressure;
     if (v !== undefined) return v;
-    if (needed) problems.push(error([...path, key], `required key is missing: no design pressure for ${key}; give loads.wind.${key} or loads.wind.pressure`));
+    if (speed) return null;
+    if (needed) problems.push(error([...path, key], `required key is missing: no design pressure for ${key}; give loads.wind.${key} or loads.wind.pressure, or a wind speed (loads.wind.speed)`));
     return 0;
   };
   const auto = log.take('windAuto', w.directions?.auto);
@@ -279,6 +284,7 @@ function buildWind(input: DesignInput, arms: readonly Arm[], attachments: readon
     membersPressure_Pa: need('members', true),
     panelsPressure_Pa: need('panels', attachments.some((a) => a.kind === 'panel')),
     pointsPressure_Pa: need('points', attachments.some((a) => a.kind !== 'panel')),
+    speed,
     directions,
     memberRule: log.take('memberWindRule', w.memberRule),
   };

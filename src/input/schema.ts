@@ -113,6 +113,17 @@ function windSchema(system: UnitSystem) {
     panels: p('sign panels'),
     members: p('the pole and arms (on the projected tube diameter)'),
     points: p('point attachments (on their wind area or EPA)'),
+    speed: z
+      .strictObject({
+        V: quantity('speed', system, 'positive', 'Basic wind speed of the site'),
+        basis: text('What V is: the map, and the return period or risk category it was taken for (printed with V)'),
+        exposure: z.enum(['B', 'C', 'D'], { error: () => 'expected exposure category B, C or D' }).meta({ description: 'Exposure category of the site: B, C or D' }),
+        Kd: factor(`Directionality factor. ${defaultNote('windKd')}`, 0.5, 1, 'the directionality factor Kd is between 0.5 and 1 (0.85 to 0.95 for poles and signs)').optional(),
+        G: factor(`Gust effect factor. ${defaultNote('windG')}`, 0.5, 2, 'the gust effect factor G is between 0.5 and 2 (about 0.85 to 1.14 for poles)').optional(),
+        Cv: factor(`Factor on V d in the Reynolds-dependent drag of round tubes. ${defaultNote('windCv')}`, 0.1, 2, 'the factor Cv on V d is between 0.1 and 2 (about 0.8)').optional(),
+      })
+      .optional()
+      .meta({ description: 'Design pressures from a basic wind speed, P = 0.00256 Kz Kd G V² Cd at each height (from memory of the AASHTO support specification; verify). A pressure typed for a class (panels, members, points, or pressure for all) overrides it for that class' }),
     memberRule: z
       .enum(['projected-area', 'cross-flow'], { error: () => 'expected projected-area or cross-flow' })
       .optional()

@@ -14,6 +14,7 @@ import { attachmentLoads, planUnit } from './attachment-loads.ts';
 import { iceWindCaseId, windCaseId } from './case-ids.ts';
 import type { AppliedLoad, LoadCase } from './load-types.ts';
 import { RULES } from './load-rules.ts';
+import { memberPressure, panelPressure, pointPressure } from './wind-pressure.ts';
 import { loadResultant } from './load-resultant.ts';
 
 /** sin θ below this: the member is taken as parallel to the wind (no load). */
@@ -35,13 +36,15 @@ export function windLoadCase(design: Design, model: FrameModel, dir: WindDirecti
   const loads: AppliedLoad[] = [];
   const wdir = planUnit(dir.angle_rad);
   const w = design.wind;
-  const pressure = (p: number, what: string): number => {
-    if (opts.kind === 'wind') return p;
-    return steps.add({ description: `Wind pressure on ${what} with ice`, symbol: `p_${what}`, formula: 'p = f_ice × p', substituted: [String(opts.factor), ' × ', qty(p, 'pressure')], result: qty(opts.factor * p, 'pressure'), source: RULES.iceWind }).si;
-  };
-  const pm = pressure(w.membersPressure_Pa, 'members');
-  const pp = pressure(w.panelsPressure_Pa, 'panels');
-  const pa = pressure(w.pointsPressure_Pa, 'points');
+  // With ice the design pressures are scaled by the ice wind factor (a step once per typed class;
+  // pressures from the wind speed carry the factor in their own steps).
+  const f = opts.factor;
+  if (opts.kind === 'ice-wind') {
+    for (const [what, p] of [['members', w.membersPressure_Pa], ['panels', w.panelsPressure_Pa], ['points', w.pointsPressure_Pa]] as const) {
+      if (p !== null) steps.add({ description: `Wind pressure on ${what} with ice`, symbol: `p_${what}`, formula: 'p = f_ice × p', substituted: [String(f), ' × ', qty(p, 'pressure')], result: qty(f * p, 'pressure'), source: RULES.iceWind });
+    }
+    if (w.speed) steps.add({ description: 'Factor on the pressures from the wind speed, with ice', symbol: 'f_ice', formula: 'f_ice', substituted: [String(f)], result: qty(f, 'ratio'), source: RULES.iceWind });
+  }
   const tag = opts.kind === 'wind' ? 'wind' : 'wind with ice';
 
   for (const ax of memberAxes(design)) {
@@ -60,27 +63,37 @@ export function windLoadCase(design: Design, model: FrameModel, dir: WindDirecti
     const rule = projected ? RULES.memberWindProjected : RULES.memberWind;
     const Dr = diameterAt(ax.section, ax.length_m, 0);
     const Dt = diameterAt(ax.section, ax.length_m, ax.length_m);
-    for (const [where, D] of [['root', Dr], ['tip', Dt]] as const) {
-      steps.add({ description: `Wind force per length on the ${name} at its ${where}`, symbol: `w_${where}`, formula: projected ? 'w = p D sin θ' : 'w = p D sin²θ', substituted: [qty(pm, 'pressure'), ' × ', qty(D, 'section'), projected ? ' × sin(' : ' × sin²(', qty(theta, 'angle'), ')'], result: qty(pm * D * s2, 'lineLoad'), source: `${rule}; ${RULES.memberWindDiameter}` });
+    const zAt = (s: number) => ax.origin_m[2] + s * ax.direction[2];
+    const ends = [['root', Dr, zAt(0)], ['tip', Dt, zAt(ax.length_m)]] as const;
+    for (const [where, D, z] of ends) {
+      const p = f * memberPressure(design, ax.section, z, D, { steps, where: `${name} ${where}` });
+      steps.add({ description: `Wind force per length on the ${name} at its ${where}`, symbol: `w_${where}`, formula: projected ? 'w = p D sin θ' : 'w = p D sin²θ', substituted: [qty(p, 'pressure'), ' × ', qty(D, 'section'), projected ? ' × sin(' : ' × sin²(', qty(theta, 'angle'), ')'], result: qty(p * D * s2, 'lineLoad'), source: `${rule}; ${RULES.memberWindDiameter}` });
     }
-    steps.add({ description: `Wind force on the ${name}, ${projected ? 'in the wind direction' : 'normal to its axis'}`, symbol: `F_${ax.id}`, formula: 'F = L (w_root + w_tip) / 2', substituted: [qty(ax.length_m, 'length'), ' × (', qty(pm * Dr * s2, 'lineLoad'), ' + ', qty(pm * Dt * s2, 'lineLoad'), ') / 2'], result: qty((ax.length_m * pm * s2 * (Dr + Dt)) / 2, 'force'), source: 'integral of a linearly varying load' });
-    if (sinT < PARALLEL_SIN) continue;
-    const direction = projected ? wdir : scale(n, 1 / sinT);
+    const direction = projected ? wdir : sinT < PARALLEL_SIN ? wdir : scale(n, 1 / sinT);
+    let total = 0;
     for (const id of info.elements) {
       const el = model.elements[id];
+      const e = elementEnds(model, el);
+      // The pressure at each element end at its height: linear along the element.
+      const wA = f * memberPressure(design, ax.section, e.endI_m[2], el.diameterI_m) * el.diameterI_m * s2;
+      const wB = f * memberPressure(design, ax.section, e.endJ_m[2], el.diameterJ_m) * el.diameterJ_m * s2;
+      total += (e.length_m * (wA + wB)) / 2;
       // The member axis is straight, so each element shares its direction.
-      loads.push({ kind: 'distributed', element: id, axes: 'global', direction, wA_Npm: pm * el.diameterI_m * s2, wB_Npm: pm * el.diameterJ_m * s2, a_m: 0, b_m: elementEnds(model, el).length_m, origin });
+      if (sinT >= PARALLEL_SIN) loads.push({ kind: 'distributed', element: id, axes: 'global', direction, wA_Npm: wA, wB_Npm: wB, a_m: 0, b_m: e.length_m, origin });
     }
+    steps.add({ description: `Wind force on the ${name}, ${projected ? 'in the wind direction' : 'normal to its axis'}`, symbol: `F_${ax.id}`, formula: 'F = Σ L_e (w_i + w_j) / 2 over the elements', substituted: [`${info.elements.length} elements`], result: qty(sinT >= PARALLEL_SIN ? total : 0, 'force'), source: 'integral of the load, linear along each element' });
   }
 
   for (const a of design.attachments) {
     if (a.kind === 'panel') {
       const cosA = Math.cos(dir.angle_rad - a.faceNormal_rad);
       const area = a.width_m * a.height_m;
+      const pp = f * panelPressure(design, a, { steps, where: `panel ${a.id}` });
       const F = pp * area * cosA;
       steps.add({ description: `Wind force on panel ${a.id}, normal to its face`, symbol: `F_${a.id}`, formula: 'F = p × b × h × cos α', substituted: [qty(pp, 'pressure'), ' × ', qty(a.width_m, 'length'), ' × ', qty(a.height_m, 'length'), ` × cos(${(((dir.angle_rad - a.faceNormal_rad) * 180) / Math.PI).toFixed(1)}°)`], result: qty(F, 'force'), source: RULES.panelWind });
       loads.push(...attachmentLoads(design, model, steps, a, scale(planUnit(a.faceNormal_rad), F), `${tag} on panel`));
     } else {
+      const pa = f * pointPressure(design, a, { steps, where: `${a.kind} ${a.id}` });
       const F = pa * a.windArea_m2;
       steps.add({ description: `Wind force on ${a.kind} ${a.id}`, symbol: `F_${a.id}`, formula: 'F = p × A', substituted: [qty(pa, 'pressure'), ' × ', qty(a.windArea_m2, 'area')], result: qty(F, 'force'), source: RULES.pointWind });
       loads.push(...attachmentLoads(design, model, steps, a, scale(wdir, F), `${tag} on ${a.kind}`));

@@ -98,6 +98,7 @@ export function makeDesign(over: Partial<Design> = {}): Design {
       panelsPressure_Pa: 1500,
       pointsPressure_Pa: 1300,
       memberRule: 'cross-flow',
+      speed: null,
       directions: [
         { angle_rad: deg(90), label: 'normal to sign face' },
         { angle_rad: 0, label: 'along the arm' },

@@ -123,6 +123,7 @@ export const FIXTURE_DESIGN: Design = {
     panelsPressure_Pa: 1350,
     pointsPressure_Pa: 1350,
     memberRule: 'projected-area',
+    speed: null,
     directions: [
       { angle_rad: 90 * DEG, label: 'normal to sign face' },
       { angle_rad: 270 * DEG, label: 'normal to sign face, reversed' },

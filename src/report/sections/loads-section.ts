@@ -49,6 +49,7 @@ export function loadsSection(loaded: LoadedDesign): DocSection {
   const d = display(design.units);
   const w = design.wind;
   const blocks: Block[] = [...templateBlocks('loads', {}).blocks];
+  const pressureText = (p: number | null): string => (p === null ? 'from the wind speed, by height (below)' : `${d.q(p, 'pressure')} (input)`);
 
   blocks.push({
     kind: 'table',
@@ -56,11 +57,29 @@ export function loadsSection(loaded: LoadedDesign): DocSection {
     header: ['Applied to', 'Pressure'],
     widths: ['*', 150],
     rows: [
-      ['Members (pole and arms), on the projected tube area', d.q(w.membersPressure_Pa, 'pressure')],
-      ['Sign panels, on the panel area', d.q(w.panelsPressure_Pa, 'pressure')],
-      ['Luminaires, signal heads and other point attachments, on their wind area', d.q(w.pointsPressure_Pa, 'pressure')],
+      ['Members (pole and arms), on the projected tube area', pressureText(w.membersPressure_Pa)],
+      ['Sign panels, on the panel area', pressureText(w.panelsPressure_Pa)],
+      ['Luminaires, signal heads and other point attachments, on their wind area', pressureText(w.pointsPressure_Pa)],
     ],
+    ...(w.speed ? { note: 'A pressure "from the wind speed" varies with height: P = 0.00256 Kz Kd G V² Cd at each element end and attachment centroid, worked in each wind load case below.' } : {}),
   });
+  if (w.speed) {
+    const s = w.speed;
+    blocks.push({
+      kind: 'table',
+      title: 'Design wind speed',
+      header: ['Item', 'Value'],
+      widths: ['*', 150],
+      rows: [
+        [`Basic wind speed V (${s.basis})`, d.q(s.V_mps, 'speed')],
+        ['Exposure category', s.exposure],
+        ['Directionality factor Kd (dimensionless)', String(s.Kd)],
+        ['Gust effect factor G (dimensionless)', String(s.G)],
+        ['Factor Cv on V d in the drag of round tubes (dimensionless)', String(s.Cv)],
+      ],
+      note: 'Sources of the defaults are in the assumptions table of the criteria section; Kz and the drag coefficients are computed in the wind load cases.',
+    });
+  }
 
   blocks.push({
     kind: 'table',
