@@ -6,7 +6,7 @@ import { parseArgs, UsageError } from '../args.ts';
 import type { Command } from '../run.ts';
 import { painter } from '../io.ts';
 import { buildPackage } from '../../pipeline.ts';
-import { writeFileAtomic } from '../../output/write-atomic.ts';
+import { writeFilesAtomic } from '../../output/write-atomic.ts';
 import { checkOutputsWritable } from '../../output/check-outputs.ts';
 import { printWarnings } from './print-warnings.ts';
 
@@ -47,8 +47,8 @@ export const buildCommand: Command = {
     checkOutputsWritable(outDir, written);
     try {
       mkdirSync(outDir, { recursive: true });
-      writeFileAtomic(pdfPath, result.pdf);
-      if (result.json !== null) writeFileAtomic(jsonPath, result.json);
+      // Both complete before either replaces an earlier file.
+      writeFilesAtomic([{ path: pdfPath, data: result.pdf }, ...(result.json !== null ? [{ path: jsonPath, data: result.json }] : [])]);
     } catch (err) {
       const code = (err as NodeJS.ErrnoException).code;
       if (typeof code !== 'string') throw err;
