@@ -44,6 +44,17 @@ export class InputError extends PolebookError {
   }
 }
 
+/** A file that cannot be used at all (missing, a folder, no permission, protected): there is no
+ * line or column to name, so the message names the file and the reason only. Exit code 2. */
+export class FileLevelError extends PolebookError {
+  constructor(
+    readonly file: string,
+    message: string,
+  ) {
+    super(message, EXIT.badInput);
+  }
+}
+
 /** The structure is a mechanism or loses stability under a combination. Exit code 3. */
 export class UnstableStructureError extends PolebookError {
   constructor(

@@ -46,8 +46,10 @@ describe('validation reports every problem at once', () => {
     expect(err.diagnostics.map((d) => d.path)).toEqual(['structure.arms[0].attachHeight', 'attachments.panels[1].position']);
   });
 
-  it('a missing file is an InputError, not a crash', () => {
-    expect(() => loadDesignFile('examples/no-such-file.yaml')).toThrow(InputError);
+  it('a missing file is bad input (exit 2) naming the file without a line and column, not a crash', () => {
+    expect(() => loadDesignFile('examples/no-such-file.yaml')).toThrow(
+      expect.objectContaining({ exitCode: 2, file: 'examples/no-such-file.yaml', message: 'cannot read the input file examples/no-such-file.yaml: there is no such file' }),
+    );
   });
 });
 

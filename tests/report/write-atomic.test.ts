@@ -1,9 +1,9 @@
-// writeFileAtomic: complete new file or the old one, never a partial file or a stray temp.
+// writeFileAtomic and writeFilesAtomic: complete new files or the old ones, never a partial file or a stray temp.
 import { mkdirSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { writeFileAtomic } from '../../src/output/write-atomic.ts';
+import { writeFileAtomic, writeFilesAtomic } from '../../src/output/write-atomic.ts';
 
 /** Bytes whose length cannot be read: the write fails after the temporary file is open. */
 class FailingBytes extends Uint8Array {
@@ -39,5 +39,26 @@ describe('writeFileAtomic', () => {
     expect(() => writeFileAtomic(target, 'data')).toThrow();
     expect(readdirSync(dir)).toEqual(['occupied']);
     expect(readFileSync(join(target, 'inside.txt'), 'utf8')).toBe('keep');
+  });
+});
+
+describe('writeFilesAtomic', () => {
+  it('a failure while writing the second file replaces neither: both earlier files stay, no temporary file', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'polebook-atomic-'));
+    const pdf = join(dir, 'package.pdf');
+    const json = join(dir, 'package.results.json');
+    writeFileSync(pdf, 'previous package');
+    writeFileSync(json, 'previous results');
+    expect(() => writeFilesAtomic([{ path: pdf, data: 'new package' }, { path: json, data: new FailingBytes(8) }])).toThrow(/simulated write failure/);
+    expect(readFileSync(pdf, 'utf8')).toBe('previous package');
+    expect(readFileSync(json, 'utf8')).toBe('previous results');
+    expect(readdirSync(dir).sort()).toEqual(['package.pdf', 'package.results.json']);
+  });
+
+  it('writes every file when all succeed', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'polebook-atomic-'));
+    writeFilesAtomic([{ path: join(dir, 'a.pdf'), data: 'A' }, { path: join(dir, 'a.results.json'), data: '{}' }]);
+    expect(readdirSync(dir).sort()).toEqual(['a.pdf', 'a.results.json']);
+    expect(readFileSync(join(dir, 'a.pdf'), 'utf8')).toBe('A');
   });
 });

@@ -1,12 +1,13 @@
 // polebook build <input> [--out DIR] [--json] [--first-order]
 import { basename, extname, join, resolve } from 'node:path';
 import { mkdirSync } from 'node:fs';
-import { EXIT } from '../../errors.ts';
+import { EXIT, FileLevelError } from '../../errors.ts';
 import { parseArgs, UsageError } from '../args.ts';
 import type { Command } from '../run.ts';
 import { painter } from '../io.ts';
 import { buildPackage } from '../../pipeline.ts';
-import { writeFileAtomic } from '../../output/write-atomic.ts';
+import { writeFilesAtomic } from '../../output/write-atomic.ts';
+import { checkOutputsWritable } from '../../output/check-outputs.ts';
 import { printWarnings } from './print-warnings.ts';
 
 const HELP = `Usage: polebook build <input.yaml> [--out DIR] [--json] [--first-order]
@@ -21,6 +22,8 @@ Options:
   --help          show this help
 
 Nothing is written unless the whole run succeeds; an earlier package is left untouched.
+The output folder is checked before the analysis: a file in its way, a folder that cannot
+be written, or an earlier package made read-only (chmod a-w) stops the run with exit code 2.
 `;
 
 export const buildCommand: Command = {
@@ -32,22 +35,24 @@ export const buildCommand: Command = {
     if (args.positionals.length !== 1) throw new UsageError('build takes exactly one input file');
     const input = resolve(io.cwd, args.positionals[0]!);
     const outDir = resolve(io.cwd, args.values.get('out') ?? 'output');
-    const result = await buildPackage(input, { env: io.env, firstOrder: args.flags.has('first-order'), json: args.flags.has('json') });
-    printWarnings(result.loaded.warnings, io);
-    // Everything is computed before anything is written.
     const stem = basename(input, extname(input));
     const pdfPath = join(outDir, `${stem}.pdf`);
     const jsonPath = join(outDir, `${stem}.results.json`);
-    const written = [pdfPath, ...(result.json !== null ? [jsonPath] : [])];
+    const written = [pdfPath, ...(args.flags.has('json') ? [jsonPath] : [])];
+    // Before the analysis: a folder in the way or a protected package is said at once.
+    checkOutputsWritable(outDir, written);
+    const result = await buildPackage(input, { env: io.env, firstOrder: args.flags.has('first-order'), json: args.flags.has('json') });
+    printWarnings(result.loaded.warnings, io);
+    // Everything is computed before anything is written; asked again in case it changed meanwhile.
+    checkOutputsWritable(outDir, written);
     try {
       mkdirSync(outDir, { recursive: true });
-      writeFileAtomic(pdfPath, result.pdf);
-      if (result.json !== null) writeFileAtomic(jsonPath, result.json);
+      // Both complete before either replaces an earlier file.
+      writeFilesAtomic([{ path: pdfPath, data: result.pdf }, ...(result.json !== null ? [{ path: jsonPath, data: result.json }] : [])]);
     } catch (err) {
-      // An --out that is a file, or a folder that cannot be written: the command is misused, not polebook.
       const code = (err as NodeJS.ErrnoException).code;
       if (typeof code !== 'string') throw err;
-      throw new UsageError(`cannot write the outputs to ${outDir}: ${(err as Error).message}; give --out a folder you can write to`);
+      throw new FileLevelError(outDir, `cannot write the outputs to ${outDir}: ${(err as Error).message}; give --out a folder you can write to`);
     }
     const paint = painter(io);
     for (const line of result.summary) io.stdout(`${line}\n`);
