@@ -5,7 +5,7 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { tmpdir } from 'node:os';
 import { performance } from 'node:perf_hooks';
-import { InputError } from '../src/errors.ts';
+import { FileLevelError, InputError } from '../src/errors.ts';
 import { loadDesignFile } from '../src/input/index.ts';
 import { MAX_INPUT_BYTES } from '../src/input/size-limits.ts';
 
@@ -25,6 +25,7 @@ function timeRefusal(file: string): { ms: number; message: string } {
   try {
     loadDesignFile(file);
   } catch (e) {
+    if (e instanceof FileLevelError) return { ms: performance.now() - t0, message: e.message };
     if (!(e instanceof InputError)) throw e;
     return { ms: performance.now() - t0, message: e.diagnostics[0]!.message };
   }

@@ -2,16 +2,17 @@
 // large (size-limits.ts), not UTF-8 text (a Latin-1 byte, UTF-16, a binary file), or holding
 // control characters in a value or key. The refusal names the line and byte; raw bytes are never
 // echoed and never silently replaced.
-import { InputError, type Diagnostic } from '../errors.ts';
+import { FileLevelError, InputError, type Diagnostic } from '../errors.ts';
 import { MAX_INPUT_BYTES } from './size-limits.ts';
 import { unsafeCharacter } from './text-safety.ts';
 import { error, type InputPath, type Problem } from './problem.ts';
 
 const fileLevel = (file: string, message: string, line = 1, col = 1): Diagnostic => ({ file, line, col, path: '', message, severity: 'error' });
 
-export function sizeProblem(file: string, bytes: number): InputError | undefined {
+/** A whole-file refusal names the file, not a made-up line and column. */
+export function sizeProblem(file: string, bytes: number): FileLevelError | undefined {
   if (bytes <= MAX_INPUT_BYTES) return undefined;
-  return new InputError([fileLevel(file, `the file is ${bytes} bytes, more than the ${MAX_INPUT_BYTES} bytes an input may have (a limit of ours; a design is a few kilobytes): is it the right file?`)]);
+  return new FileLevelError(file, `cannot read the input file ${file}: it is ${bytes} bytes, more than the ${MAX_INPUT_BYTES} bytes an input may have (a limit of ours; a design is a few kilobytes): is it the right file?`);
 }
 
 /** Length of the valid UTF-8 sequence starting at i, or 0 when the bytes there are not UTF-8. */
@@ -32,7 +33,7 @@ export function decodeInput(file: string, bytes: Uint8Array): string {
   const big = sizeProblem(file, bytes.length);
   if (big) throw big;
   if ((bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff)) {
-    throw new InputError([fileLevel(file, 'the file is UTF-16 text; polebook reads UTF-8: save it again as UTF-8')]);
+    throw new FileLevelError(file, `cannot read the input file ${file}: it is UTF-16 text; polebook reads UTF-8: save it again as UTF-8`);
   }
   let line = 1;
   let lineStart = 0;

@@ -3,7 +3,7 @@
 import { createHash } from 'node:crypto';
 import { LineCounter, isAlias, parseDocument, visit, type Document } from 'yaml';
 import type { Design, LoadedDesign } from '../design/design.ts';
-import { InputError, type Diagnostic } from '../errors.ts';
+import { FileLevelError, InputError, type Diagnostic } from '../errors.ts';
 import type { UnitSystem } from '../units/units.ts';
 import { normalise } from './normalise.ts';
 import { plausibilityWarnings } from './plausibility.ts';
@@ -64,7 +64,7 @@ function loadFromText(original: string, file: string, hash: string, env: LoadEnv
   }
   const data: unknown = toData(doc, text, lines, file);
   if (data === null || data === undefined) {
-    throw new InputError([{ file, line: 1, col: 1, path: '', message: 'the file is empty; expected an input starting with formatVersion: 1 (`polebook new <kind>` writes a starter)', severity: 'error' }]);
+    throw new FileLevelError(file, `cannot read the input file ${file}: it is empty; expected an input starting with formatVersion: 1 (\`polebook new <kind>\` writes a starter)`);
   }
   const unsafe = [...unsafeTextProblems(data), ...mergeKeyProblems(data)];
   if (unsafe.length > 0) throw new InputError(sortByPlace(unsafe.map(toDiagnostic)));

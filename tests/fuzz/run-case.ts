@@ -11,7 +11,7 @@ import { analysisSections } from '../../src/report/sections/analysis-sections.ts
 import { runChecks } from '../../src/checks/run-checks.ts';
 import { resultsJson } from '../../src/export/results-json.ts';
 import { analysisSummaryLines, movementWarningLines } from '../../src/analysis-summary.ts';
-import { InputError, UnstableStructureError, formatDiagnostic } from '../../src/errors.ts';
+import { FileLevelError, InputError, UnstableStructureError, formatDiagnostic } from '../../src/errors.ts';
 import { cli } from '../cli/run-cli.ts';
 import { readPdf } from '../report/pdf-tools.ts';
 
@@ -86,6 +86,8 @@ export function runLibrary(text: string, file: string): Outcome {
     loaded = loadDesignText(text, file, { SOURCE_DATE_EPOCH: '1767225600' });
   } catch (err) {
     if (err instanceof InputError) return inputOutcome(err);
+    // A refusal of the whole file (empty, too large, UTF-16) names the file, with no position.
+    if (err instanceof FileLevelError) return { kind: 'input', first: err.message };
     return { kind: 'failure', reason: `loading threw ${describe(err)}` };
   }
   let analysis;

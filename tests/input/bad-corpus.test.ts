@@ -2,7 +2,7 @@
 // mistake: line, column and key path as worked out from the file's text (tests/fixtures/generate-bad-corpus.py).
 import { readdirSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { InputError, formatDiagnostic } from '../../src/errors.ts';
+import { FileLevelError, InputError, formatDiagnostic } from '../../src/errors.ts';
 import { loadDesignFile } from '../../src/input/index.ts';
 import { BAD_CORPUS, BAD_DIR } from '../fixtures/bad-corpus.ts';
 
@@ -23,7 +23,21 @@ describe('bad-input corpus', () => {
     expect(files.sort()).toEqual(BAD_CORPUS.map((c) => c.name).sort());
   });
 
-  for (const c of BAD_CORPUS.filter((x) => x.stage !== 'cli')) {
+  for (const c of BAD_CORPUS.filter((x) => x.fileLevel)) {
+    it(`${c.name}: ${c.mistake} (the whole file, named without a line and column)`, () => {
+      let err: unknown;
+      try {
+        loadDesignFile(c.file);
+      } catch (e) {
+        err = e;
+      }
+      expect(err).toBeInstanceOf(FileLevelError);
+      expect((err as FileLevelError).message).toContain(c.messageIncludes);
+      expect((err as FileLevelError).exitCode).toBe(2);
+    });
+  }
+
+  for (const c of BAD_CORPUS.filter((x) => x.stage !== 'cli' && !x.fileLevel)) {
     it(`${c.name}: ${c.mistake}`, () => {
       const err = firstDiagnostic(c.file);
       const d = err.diagnostics[0];
