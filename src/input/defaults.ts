@@ -52,6 +52,12 @@ export const DEFAULTS = {
     value: 'fixed',
     source: `common practice (base plate on anchor bolts taken as fully fixed); ${VERIFY} and the foundation design`,
   },
+  armLengthFrom: {
+    key: 'structure.arms[].lengthFrom',
+    label: 'Arm length and the positions on the arm measured from',
+    value: 'face',
+    source: 'polebook default: from the pole face, where the arm meets the pole; give lengthFrom: axis for drawings dimensioned from the pole centreline',
+  },
   armRise: {
     key: 'structure.arms[].rise',
     label: 'Arm rise angle above horizontal',

@@ -50,6 +50,8 @@ export function normalise(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?
   // Arms.
   const arms: Arm[] = [];
   const armIds = new Set<string>();
+  /** For each arm, how far its input lengths and positions are from the face (0 from the face). */
+  const armShift = new Map<string, number>();
   (input.structure.arms ?? []).forEach((a, i) => {
     const path: InputPath = ['structure', 'arms', i];
     if (a.id === 'pole') problems.push(error([...path, 'id'], "'pole' is reserved for attachments on the pole; choose another arm id"));
@@ -63,14 +65,31 @@ export function normalise(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?
     if (!(rise >= ARM_RISE_MIN_RAD && rise <= ARM_RISE_MAX_RAD)) {
       problems.push(error([...path, 'rise'], `a rise of ${formatQuantity(rise, 'angle', system)} is outside ${ARM_RISE_MIN_RAD / DEG_RAD} to ${ARM_RISE_MAX_RAD / DEG_RAD} deg, the arms polebook models (limits of ours): the rise is the arm's angle above horizontal, 0 to 15 deg for most mast arms; a member closer to vertical is a pole, not an arm`));
     }
-    const section = buildSection(a.section, a.length, [...path, 'section'], system, problems);
-    if (section) arms.push({ id: a.id, attachHeight_m: a.attachHeight, direction_rad: a.direction, length_m: a.length, rise_rad: rise, section });
+    // Lengths from the pole axis are turned into lengths from the face: the radius of the pole
+    // face at the attachment height (half the across-flats width of a multisided pole) comes off.
+    const from = log.take('armLengthFrom', a.lengthFrom, { key: `structure.arms[${i}].lengthFrom`, label: `Arm ${a.id}: length and positions measured from the pole` });
+    const shift = from === 'axis' && poleSection ? poleFaceRadiusAt(poleSection, poleIn.height, a.attachHeight) : 0;
+    armShift.set(a.id, shift);
+    if (a.length <= shift * (1 + FIT_TOL)) {
+      problems.push(error([...path, 'length'], `arm ${a.id} is ${len(a.length)} from the pole axis, not more than the pole face radius ${len(shift)} there: the arm has no length outside the pole`));
+      return;
+    }
+    const section = buildSection(a.section, a.length - shift, [...path, 'section'], system, problems);
+    if (section) arms.push({ id: a.id, attachHeight_m: a.attachHeight, direction_rad: a.direction, length_m: a.length - shift, rise_rad: rise, section });
   });
 
-  const attachments = buildAttachments(input, arms, system, problems, log);
+  const attachments = buildAttachments(input, arms, armShift, system, problems, log);
   const wind = buildWind(input, arms, attachments, log, problems);
   const ice = buildIce(input, log);
-  const fatigue = buildFatigue(input, log, problems);
+  const fatigueIn = buildFatigue(input, log, problems);
+  // Lanes on an arm measured from the pole axis are taken to the face, like its positions.
+  const fatigue = fatigueIn?.truckGust
+    ? { ...fatigueIn, truckGust: { ...fatigueIn.truckGust, lanes: fatigueIn.truckGust.lanes.map((l) => {
+        const shift = armShift.get(l.arm) ?? 0;
+        const L = arms.find((a) => a.id === l.arm)?.length_m ?? Infinity;
+        return { ...l, from_m: Math.min(L, Math.max(0, l.from_m - shift)), to_m: Math.min(L, Math.max(0, l.to_m - shift)) };
+      }) } }
+    : fatigueIn;
   const criteria = buildCriteria(input, log, problems);
   const useDefaultSet = input.combinations === undefined || input.combinations === 'default';
   if (!useDefaultSet && input.criteria?.serviceWindFactor !== undefined) {
@@ -162,14 +181,24 @@ function buildBase(input: DesignInput, log: AssumptionLog, problems: Problem[]):
 
 interface MemberInfo {
   readonly kind: 'pole' | 'arm';
+  /** Length in the input's own convention (an arm measured from the pole axis includes the shift). */
   readonly length_m: number;
   readonly direction_rad: number;
+  /** Input positions minus this are positions from the pole face (the pole face radius for an
+   * arm measured from the pole axis, else 0). */
+  readonly shift_m: number;
 }
 
-function findMember(on: string, arms: readonly Arm[], input: DesignInput, path: InputPath, problems: Problem[]): MemberInfo | undefined {
-  if (on === 'pole') return { kind: 'pole', length_m: input.structure.pole.height, direction_rad: 0 };
+/** Radius of the pole face at height z: half the outside diameter, or the across-flats width. */
+function poleFaceRadiusAt(section: { readonly rootDiameter_m: number; readonly tipDiameter_m: number }, height_m: number, z_m: number): number {
+  return (section.rootDiameter_m + ((section.tipDiameter_m - section.rootDiameter_m) * z_m) / height_m) / 2;
+}
+
+function findMember(on: string, arms: readonly Arm[], armShift: ReadonlyMap<string, number>, input: DesignInput, path: InputPath, problems: Problem[]): MemberInfo | undefined {
+  if (on === 'pole') return { kind: 'pole', length_m: input.structure.pole.height, direction_rad: 0, shift_m: 0 };
   const arm = arms.find((a) => a.id === on);
-  if (arm) return { kind: 'arm', length_m: arm.length_m, direction_rad: arm.direction_rad };
+  const shift = armShift.get(on) ?? 0;
+  if (arm) return { kind: 'arm', length_m: arm.length_m + shift, direction_rad: arm.direction_rad, shift_m: shift };
   const declared = (input.structure.arms ?? []).map((a) => a.id);
   if (declared.includes(on)) return undefined; // the arm itself has an error, reported there
   const guess = closest(on, declared);
@@ -191,7 +220,7 @@ function buildOffset(offset: OffsetInput, member: MemberInfo, path: InputPath, p
   return { offset: { vertical_m: 0, lateral_m: lateral, direction_rad: o.direction ?? 0 }, defaulted: offset === undefined };
 }
 
-function buildAttachments(input: DesignInput, arms: readonly Arm[], system: UnitSystem, problems: Problem[], log: AssumptionLog): Attachment[] {
+function buildAttachments(input: DesignInput, arms: readonly Arm[], armShift: ReadonlyMap<string, number>, system: UnitSystem, problems: Problem[], log: AssumptionLog): Attachment[] {
   const out: Attachment[] = [];
   const ids = new Set<string>();
   const onAxis: string[] = [];
@@ -205,7 +234,7 @@ function buildAttachments(input: DesignInput, arms: readonly Arm[], system: Unit
   (input.attachments?.panels ?? []).forEach((p, i) => {
     const path: InputPath = ['attachments', 'panels', i];
     claim(p.id, path);
-    const m = findMember(p.on, arms, input, path, problems);
+    const m = findMember(p.on, arms, armShift, input, path, problems);
     if (!m) return;
     const along = m.kind === 'arm' ? p.width : p.height;
     const end = m.kind === 'arm' ? 'tip' : 'top';
@@ -213,7 +242,7 @@ function buildAttachments(input: DesignInput, arms: readonly Arm[], system: Unit
       problems.push(error([...path, 'position'], `position ${len(p.position)} is beyond the ${end} of ${where(m, p.on)} (${len(m.length_m)})`));
     } else if (p.position + along / 2 > m.length_m * (1 + FIT_TOL)) {
       problems.push(error([...path, 'position'], `the panel (centre at ${len(p.position)}, ${m.kind === 'arm' ? 'width' : 'height'} ${len(along)}) reaches past the ${end} of ${where(m, p.on)} at ${len(m.length_m)}`));
-    } else if (p.position - along / 2 < -FIT_TOL * m.length_m) {
+    } else if (p.position - along / 2 < m.shift_m - FIT_TOL * m.length_m) {
       problems.push(error([...path, 'position'], `the panel (centre at ${len(p.position)}, ${m.kind === 'arm' ? 'width' : 'height'} ${len(along)}) reaches past the ${m.kind === 'arm' ? 'pole face at the arm root' : 'pole base'}`));
     }
     let faceNormal = m.direction_rad + Math.PI / 2;
@@ -227,7 +256,7 @@ function buildAttachments(input: DesignInput, arms: readonly Arm[], system: Unit
     const { offset, defaulted } = buildOffset(p.offset, m, path, problems);
     if (defaulted) onAxis.push(p.id);
     out.push({
-      kind: 'panel', id: p.id, description: p.description ?? `Panel ${p.id}`, member: p.on, position_m: p.position,
+      kind: 'panel', id: p.id, description: p.description ?? `Panel ${p.id}`, member: p.on, position_m: p.position - m.shift_m,
       width_m: p.width, height_m: p.height, weightPerArea_Pa: p.weightPerArea, offset, faceNormal_rad: faceNormal,
     });
   });
@@ -235,18 +264,20 @@ function buildAttachments(input: DesignInput, arms: readonly Arm[], system: Unit
   (input.attachments?.points ?? []).forEach((p, i) => {
     const path: InputPath = ['attachments', 'points', i];
     claim(p.id, path);
-    const m = findMember(p.on, arms, input, path, problems);
+    const m = findMember(p.on, arms, armShift, input, path, problems);
     if (p.windArea !== undefined && p.epa !== undefined) problems.push(error([...path, 'epa'], 'give windArea or epa, not both'));
     if (p.windArea === undefined && p.epa === undefined) problems.push(error([...path, 'windArea'], 'required key is missing: give windArea (projected area) or epa (effective projected area)'));
     if (!m) return;
     if (p.position > m.length_m * (1 + FIT_TOL)) {
       problems.push(error([...path, 'position'], `position ${len(p.position)} is beyond the ${m.kind === 'arm' ? 'tip' : 'top'} of ${where(m, p.on)} (${len(m.length_m)})`));
+    } else if (p.position < m.shift_m * (1 - FIT_TOL)) {
+      problems.push(error([...path, 'position'], `position ${len(p.position)} from the pole axis is inside the pole (its face is ${len(m.shift_m)} from the axis there); expected a position on the arm`));
     }
     const { offset, defaulted } = buildOffset(p.offset, m, path, problems);
     if (defaulted) onAxis.push(p.id);
     const typeName = p.type === 'signal-head' ? 'Signal head' : p.type === 'luminaire' ? 'Luminaire' : 'Attachment';
     out.push({
-      kind: p.type, id: p.id, description: p.description ?? `${typeName} ${p.id}`, member: p.on, position_m: p.position,
+      kind: p.type, id: p.id, description: p.description ?? `${typeName} ${p.id}`, member: p.on, position_m: Math.max(0, p.position - m.shift_m),
       weight_N: p.weight, windArea_m2: p.windArea ?? p.epa ?? 0, offset,
     });
   });

@@ -72,7 +72,11 @@ function armSchema(system: UnitSystem) {
     id: id('Arm id, referred to by attachments (e.g. A1)'),
     attachHeight: quantity('length', system, 'positive', 'Height of the arm axis where it meets the pole, above the pole base'),
     direction: quantity('angle', system, 'planAngle', 'Plan direction of the arm from the pole (deg from +X toward +Y)'),
-    length: quantity('length', system, 'positive', 'Length along the arm axis from the pole face to the tip'),
+    length: quantity('length', system, 'positive', 'Length along the arm axis to the tip, from the pole face or the pole axis (lengthFrom)'),
+    lengthFrom: z
+      .enum(['face', 'axis'], { error: () => 'expected face or axis' })
+      .optional()
+      .meta({ description: `Where the arm length and the positions of the attachments on this arm are measured from: face (the pole face, where the arm meets the pole) or axis (the pole centreline, as signal mast arms are often dimensioned). ${defaultNote('armLengthFrom')}` }),
     rise: quantity('angle', system, 'any', `Rise angle of the arm above horizontal. ${defaultNote('armRise')}`).optional(),
     section: sectionSchema(system),
   });
