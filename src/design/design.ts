@@ -55,7 +55,7 @@ export type MemberRef = 'pole' | string;
  * On an arm: vertical_m up (+) or down (-), lateral_m horizontal and perpendicular to
  * the arm in plan, positive to the left looking from root to tip (+90 deg in plan).
  * On the pole: lateral_m horizontal from the pole axis in plan direction direction_rad;
- * vertical_m is unused (0). */
+ * vertical_m up (+) or down (-) from the position (the height of the bracket). */
 export interface Offset {
   readonly vertical_m: number;
   readonly lateral_m: number;

@@ -215,9 +215,8 @@ function buildOffset(offset: OffsetInput, member: MemberInfo, path: InputPath, p
     if (o.direction !== undefined) problems.push(error([...path, 'offset', 'direction'], 'offset.direction applies only on the pole; on an arm, lateral is measured square to the arm'));
     return { offset: { vertical_m: vertical, lateral_m: lateral, direction_rad: member.direction_rad + Math.PI / 2 }, defaulted: offset === undefined };
   }
-  if (o.vertical !== undefined && o.vertical !== 0) problems.push(error([...path, 'offset', 'vertical'], 'on the pole the height is the position; offset.vertical applies only on arms'));
   if (lateral !== 0 && o.direction === undefined) problems.push(error([...path, 'offset', 'direction'], 'required key is missing: a lateral offset on the pole needs its plan direction'));
-  return { offset: { vertical_m: 0, lateral_m: lateral, direction_rad: o.direction ?? 0 }, defaulted: offset === undefined };
+  return { offset: { vertical_m: vertical, lateral_m: lateral, direction_rad: o.direction ?? 0 }, defaulted: offset === undefined };
 }
 
 function buildAttachments(input: DesignInput, arms: readonly Arm[], armShift: ReadonlyMap<string, number>, system: UnitSystem, problems: Problem[], log: AssumptionLog): Attachment[] {

@@ -60,7 +60,7 @@ function sectionSchema(system: UnitSystem) {
 function offsetSchema(system: UnitSystem) {
   return z
     .strictObject({
-      vertical: quantity('length', system, 'any', 'On an arm: offset of the centroid above (+) or below (-) the arm axis').optional(),
+      vertical: quantity('length', system, 'any', 'Offset of the centroid above (+) or below (-) the arm axis, or on the pole above or below the position (a bracket)').optional(),
       lateral: quantity('length', system, 'any', 'On an arm: horizontal offset perpendicular to the arm, + to the left looking from root to tip. On the pole: distance from the pole axis').optional(),
       direction: quantity('angle', system, 'planAngle', 'On the pole only: plan direction of the lateral offset (deg from +X toward +Y)').optional(),
     })

@@ -61,11 +61,12 @@ export const pointOnAxis = (ax: MemberAxis, s_m: number): Vec3 => add(ax.origin_
 /**
  * Global vector from the member axis to an attachment centroid (see design.ts Offset):
  * on an arm, vertical_m along global Z and lateral_m horizontal, +90 degrees in plan from the
- * arm direction; on the pole, lateral_m horizontal in plan direction offset.direction_rad.
+ * arm direction; on the pole, lateral_m horizontal in plan direction offset.direction_rad and
+ * vertical_m along Z from the position (a bracket that holds the centroid above or below it).
  */
 export function offsetVector(ax: MemberAxis, off: Offset): Vec3 {
   if (ax.kind === 'pole') {
-    return [off.lateral_m * Math.cos(off.direction_rad), off.lateral_m * Math.sin(off.direction_rad), 0];
+    return [off.lateral_m * Math.cos(off.direction_rad), off.lateral_m * Math.sin(off.direction_rad), off.vertical_m];
   }
   return [-off.lateral_m * Math.sin(ax.plan_rad), off.lateral_m * Math.cos(ax.plan_rad), off.vertical_m];
 }

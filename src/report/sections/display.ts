@@ -48,7 +48,8 @@ export function positionText(a: Attachment, d: Display): string {
 export function offsetText(a: Attachment, d: Display): string {
   const o: Offset = a.offset;
   if (a.member === 'pole') {
-    return o.lateral_m === 0 ? 'on the pole axis' : `${d.q(o.lateral_m, 'length')} toward ${d.angle(o.direction_rad)}`;
+    const side = o.lateral_m === 0 ? 'on the pole axis' : `${d.q(o.lateral_m, 'length')} toward ${d.angle(o.direction_rad)}`;
+    return o.vertical_m === 0 ? side : `${side}, vertical ${d.q(o.vertical_m, 'length')}`;
   }
   return `vertical ${d.q(o.vertical_m, 'length')}, lateral ${d.q(o.lateral_m, 'length')}`;
 }
