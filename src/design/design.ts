@@ -29,6 +29,15 @@ export interface Pole {
   readonly height_m: number;
   readonly section: TubeSection;
   readonly base: BaseFixity;
+  /** Absent or null fields: the class pressure and the shape's drag apply. */
+  readonly wind?: MemberWind;
+}
+
+/** A member's own wind: a typed pressure (over the class pressure and the wind speed), or a drag
+ * coefficient for the wind-speed path (over the table); null when not given. */
+export interface MemberWind {
+  readonly pressure_Pa: number | null;
+  readonly drag: number | null;
 }
 
 /**
@@ -45,6 +54,8 @@ export interface Arm {
   /** Rise angle above horizontal. */
   readonly rise_rad: number;
   readonly section: TubeSection;
+  /** Absent or null fields: the class pressure and the shape's drag apply. */
+  readonly wind?: MemberWind;
 }
 
 /** Where an attachment sits. For an arm: distance along the arm axis from the arm root

@@ -45,7 +45,7 @@ export function normalise(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?
   const poleIn = input.structure.pole;
   const poleSection = buildSection(poleIn.section, poleIn.height, ['structure', 'pole', 'section'], system, problems);
   const base = buildBase(input, log, problems);
-  const pole: Pole | undefined = poleSection ? { height_m: poleIn.height, section: poleSection, base } : undefined;
+  const pole: Pole | undefined = poleSection ? { height_m: poleIn.height, section: poleSection, base, wind: { pressure_Pa: poleIn.windPressure ?? null, drag: poleIn.drag ?? null } } : undefined;
 
   // Arms.
   const arms: Arm[] = [];
@@ -75,7 +75,7 @@ export function normalise(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?
       return;
     }
     const section = buildSection(a.section, a.length - shift, [...path, 'section'], system, problems);
-    if (section) arms.push({ id: a.id, attachHeight_m: a.attachHeight, direction_rad: a.direction, length_m: a.length - shift, rise_rad: rise, section });
+    if (section) arms.push({ id: a.id, attachHeight_m: a.attachHeight, direction_rad: a.direction, length_m: a.length - shift, rise_rad: rise, section, wind: { pressure_Pa: a.windPressure ?? null, drag: a.drag ?? null } });
   });
 
   const attachments = buildAttachments(input, arms, armShift, system, problems, log);
@@ -311,7 +311,8 @@ function buildWind(input: DesignInput, arms: readonly Arm[], attachments: readon
   const directions = windDirections(arms, attachments, auto, w.directions?.add ?? []);
   if (directions.length === 0) problems.push(error([...path, 'directions'], 'no wind direction to analyse: set auto: true or add angles'));
   return {
-    membersPressure_Pa: need('members', true),
+    // Members that carry their own pressure need no class pressure.
+    membersPressure_Pa: need('members', input.structure.pole.windPressure === undefined || (input.structure.arms ?? []).some((a) => a.windPressure === undefined)),
     panelsPressure_Pa: need('panels', attachments.some((a) => a.kind === 'panel')),
     pointsPressure_Pa: need('points', attachments.some((a) => a.kind !== 'panel')),
     speed,

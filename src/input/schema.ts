@@ -79,7 +79,16 @@ function armSchema(system: UnitSystem) {
       .meta({ description: `Where the arm length and the positions of the attachments on this arm are measured from: face (the pole face, where the arm meets the pole) or axis (the pole centreline, as signal mast arms are often dimensioned). ${defaultNote('armLengthFrom')}` }),
     rise: quantity('angle', system, 'any', `Rise angle of the arm above horizontal. ${defaultNote('armRise')}`).optional(),
     section: sectionSchema(system),
+    ...memberWindKeys(system),
   });
+}
+
+/** A member's own wind pressure, or its drag coefficient for the wind-speed path. */
+function memberWindKeys(system: UnitSystem) {
+  return {
+    windPressure: quantity('pressure', system, 'nonNegative', 'Design wind pressure on this member, on its projected tube area (overrides loads.wind.members and the wind speed for this member)').optional(),
+    drag: factor('Drag coefficient of this member for the wind-speed path (overrides the table of its shape)', 0.1, 3, 'a drag coefficient is between 0.1 and 3 (about 0.45 to 1.2 for tubes)').optional(),
+  };
 }
 
 function panelSchema(system: UnitSystem) {
@@ -206,6 +215,7 @@ export function buildInputSchema(system: UnitSystem) {
         pole: z.strictObject({
           height: quantity('length', system, 'positive', 'Pole height above the base plate'),
           section: sectionSchema(system),
+          ...memberWindKeys(system),
           base: z
             .strictObject({
               fixity: z.enum(['fixed', 'rotational-spring']).meta({ description: `fixed | rotational-spring. ${defaultNote('baseFixity')}` }),

@@ -66,7 +66,7 @@ export function windLoadCase(design: Design, model: FrameModel, dir: WindDirecti
     const zAt = (s: number) => ax.origin_m[2] + s * ax.direction[2];
     const ends = [['root', Dr, zAt(0)], ['tip', Dt, zAt(ax.length_m)]] as const;
     for (const [where, D, z] of ends) {
-      const p = f * memberPressure(design, ax.section, z, D, { steps, where: `${name} ${where}` });
+      const p = f * memberPressure(design, ax.id, ax.section, z, D, { steps, where: `${name} ${where}` });
       steps.add({ description: `Wind force per length on the ${name} at its ${where}`, symbol: `w_${where}`, formula: projected ? 'w = p D sin θ' : 'w = p D sin²θ', substituted: [qty(p, 'pressure'), ' × ', qty(D, 'section'), projected ? ' × sin(' : ' × sin²(', qty(theta, 'angle'), ')'], result: qty(p * D * s2, 'lineLoad'), source: `${rule}; ${RULES.memberWindDiameter}` });
     }
     const direction = projected ? wdir : sinT < PARALLEL_SIN ? wdir : scale(n, 1 / sinT);
@@ -75,8 +75,8 @@ export function windLoadCase(design: Design, model: FrameModel, dir: WindDirecti
       const el = model.elements[id];
       const e = elementEnds(model, el);
       // The pressure at each element end at its height: linear along the element.
-      const wA = f * memberPressure(design, ax.section, e.endI_m[2], el.diameterI_m) * el.diameterI_m * s2;
-      const wB = f * memberPressure(design, ax.section, e.endJ_m[2], el.diameterJ_m) * el.diameterJ_m * s2;
+      const wA = f * memberPressure(design, ax.id, ax.section, e.endI_m[2], el.diameterI_m) * el.diameterI_m * s2;
+      const wB = f * memberPressure(design, ax.id, ax.section, e.endJ_m[2], el.diameterJ_m) * el.diameterJ_m * s2;
       total += (e.length_m * (wA + wB)) / 2;
       // The member axis is straight, so each element shares its direction.
       if (sinT >= PARALLEL_SIN) loads.push({ kind: 'distributed', element: id, axes: 'global', direction, wA_Npm: wA, wB_Npm: wB, a_m: 0, b_m: e.length_m, origin });

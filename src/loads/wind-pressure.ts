@@ -41,13 +41,19 @@ function pressureStep(design: Design, out: PressureSteps, Kz: number, Cd: number
   });
 }
 
-/** Pressure on a member at height z where its outside diameter (across flats) is D. */
-export function memberPressure(design: Design, section: TubeSection, z_m: number, D_m: number, out?: PressureSteps): number {
+/** Pressure on a member at height z where its outside diameter (across flats) is D: the member's
+ * own pressure, else the class pressure, else from the wind speed (with the member's own drag if given). */
+export function memberPressure(design: Design, member: string, section: TubeSection, z_m: number, D_m: number, out?: PressureSteps): number {
+  const own = member === 'pole' ? design.pole.wind : design.arms.find((a) => a.id === member)?.wind;
+  if (own?.pressure_Pa != null) return own.pressure_Pa;
   const typed = design.wind.membersPressure_Pa;
   if (typed !== null) return typed;
   const { q, Kz } = velocityPressure(design, z_m, out);
   let Cd: number;
-  if (section.shape === 'round') {
+  if (own?.drag != null) {
+    Cd = own.drag;
+    out?.steps.add({ description: `Drag coefficient of the ${out.where.replace(/ (root|tip)$/, '')}, as given`, symbol: 'Cd', formula: 'Cd (input)', substituted: [String(Cd)], result: qty(Cd, 'ratio'), source: 'input' });
+  } else if (section.shape === 'round') {
     const r = roundDrag(design.wind.speed!.Cv, design.wind.speed!.V_mps, D_m);
     Cd = r.Cd;
     out?.steps.add({ description: `Drag coefficient of the round tube at the ${out.where} (Cv V d = ${r.CvVd.toFixed(1)} mph·ft)`, symbol: 'Cd', formula: 'Cd(Cv V d)', substituted: [`Cv V d = ${r.CvVd.toFixed(1)} mph·ft, D = `, qty(D_m, 'section')], result: qty(Cd, 'ratio'), source: ROUND_DRAG_SOURCE });

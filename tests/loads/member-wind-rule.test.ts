@@ -59,3 +59,21 @@ describe('wind on an arm rising 10 deg, wind along the arm', () => {
     expect(ratio).toBeCloseTo(5.76, 2);
   });
 });
+
+describe("a member's own wind pressure", () => {
+  // A horizontal arm along +X in a wind toward +Y: F = p D L with the arm's own p (2 kPa), not the
+  // class pressure (1 kPa); the hair-thin pole's own load (class pressure) is taken off as above.
+  it('overrides the members pressure for that member only', () => {
+    const base = makeDesign({});
+    const design = makeDesign({
+      pole: { height_m: H, section: roundSection(D_POLE, D_POLE, D_POLE / 10), base: { kind: 'fixed' } },
+      arms: [testArm({ attachHeight_m: H, rise_rad: 0, length_m: L, direction_rad: 0, section: roundSection(D, D, 0.006), wind: { pressure_Pa: 2 * p, drag: null } })],
+      attachments: [],
+      wind: { ...base.wind, membersPressure_Pa: p, memberRule: 'projected-area', directions: [{ angle_rad: Math.PI / 2, label: 'across the arm' }] },
+    });
+    const model = buildFrame(design, { segmentsPerMember: 6 });
+    const f = loadResultant(model, windLoadCase(design, model, design.wind.directions[0]!).loads).force_N;
+    const pole = p * D_POLE * H;
+    expect(Math.abs((f[1] - pole) / (2 * p * D * L) - 1)).toBeLessThan(1e-12);
+  });
+});

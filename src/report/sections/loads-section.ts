@@ -63,6 +63,17 @@ export function loadsSection(loaded: LoadedDesign): DocSection {
     ],
     ...(w.speed ? { note: 'A pressure "from the wind speed" varies with height: P = 0.00256 Kz Kd G V² Cd at each element end and attachment centroid, worked in each wind load case below.' } : {}),
   });
+  const own = [['pole', design.pole.wind] as const, ...design.arms.map((a) => [`arm ${a.id}`, a.wind] as const)].filter(([, mw]) => mw && (mw.pressure_Pa !== null || mw.drag !== null));
+  if (own.length > 0) {
+    blocks.push({
+      kind: 'table',
+      title: 'Members with their own wind pressure or drag coefficient',
+      header: ['Member', 'Pressure', 'Drag coefficient'],
+      widths: ['*', 120, 120],
+      rows: own.map(([name, mw]) => [name, mw!.pressure_Pa !== null ? `${d.q(mw!.pressure_Pa, 'pressure')} (input)` : '—', mw!.drag !== null ? `${mw!.drag} (input)` : '—']),
+      note: 'A member pressure overrides the members pressure and the wind speed for that member; a member drag coefficient replaces the table value in the wind-speed path.',
+    });
+  }
   if (w.speed) {
     const s = w.speed;
     blocks.push({
