@@ -94,8 +94,13 @@ export interface PointAttachment {
   readonly member: MemberRef;
   readonly position_m: number;
   readonly weight_N: number;
-  /** Projected (or effective projected) wind area, the same for every wind direction. */
+  /** Projected (or effective projected) wind area of the face; with no side area, the area
+   * for every wind direction. */
   readonly windArea_m2: number;
+  /** Area seen from the side (90 deg to the face); null: the face area from every direction. */
+  readonly sideArea_m2: number | null;
+  /** Plan direction of the face normal (square to the arm on an arm; given on the pole). */
+  readonly faceNormal_rad: number;
   readonly offset: Offset;
 }
 

@@ -223,6 +223,7 @@ function buildAttachments(input: DesignInput, arms: readonly Arm[], armShift: Re
   const out: Attachment[] = [];
   const ids = new Set<string>();
   const onAxis: string[] = [];
+  const sameEveryWay: string[] = [];
   const len = (v: number) => formatQuantity(v, 'length', system);
   const claim = (id: string, path: InputPath) => {
     if (ids.has(id)) problems.push(error([...path, 'id'], `duplicate attachment id '${id}'; panels and point attachments each need their own id`));
@@ -275,12 +276,25 @@ function buildAttachments(input: DesignInput, arms: readonly Arm[], armShift: Re
     const { offset, defaulted } = buildOffset(p.offset, m, path, problems);
     if (defaulted) onAxis.push(p.id);
     const typeName = p.type === 'signal-head' ? 'Signal head' : p.type === 'luminaire' ? 'Luminaire' : 'Attachment';
+    if (m.kind === 'arm' && p.faceDirection !== undefined) problems.push(error([...path, 'faceDirection'], 'faceDirection applies only on the pole; on an arm the face is square to the arm'));
+    if (m.kind === 'pole' && p.sideArea !== undefined && p.faceDirection === undefined) problems.push(error([...path, 'faceDirection'], 'required key is missing: a side area on the pole needs the plan direction of the face'));
+    if (p.sideArea === undefined) sameEveryWay.push(p.id);
     out.push({
       kind: p.type, id: p.id, description: p.description ?? `${typeName} ${p.id}`, member: p.on, position_m: Math.max(0, p.position - m.shift_m),
-      weight_N: p.weight, windArea_m2: p.windArea ?? p.epa ?? 0, offset,
+      weight_N: p.weight, windArea_m2: p.windArea ?? p.epa ?? 0, sideArea_m2: p.sideArea ?? null,
+      faceNormal_rad: m.kind === 'arm' ? m.direction_rad + Math.PI / 2 : (p.faceDirection ?? 0), offset,
     });
   });
 
+  if (sameEveryWay.length > 0) {
+    log.note({
+      key: 'attachments.points[].sideArea',
+      label: 'Point attachments without a side area take their face area from every wind direction',
+      value: sameEveryWay.join(', '),
+      source: 'polebook default: no sideArea given; give sideArea for an attachment whose area seen from the side differs (signal heads, luminaires), verify',
+      defaulted: true,
+    });
+  }
   if (onAxis.length > 0) {
     log.note({
       key: 'attachments.*.offset',

@@ -115,6 +115,8 @@ function pointSchema(system: UnitSystem) {
     weight: quantity('weight', system, 'nonNegative', 'Weight (lb | N)'),
     windArea: quantity('area', system, 'nonNegative', 'Projected wind area (give this or epa)').optional(),
     epa: quantity('area', system, 'nonNegative', "Effective projected area from the maker's data (give this or windArea)").optional(),
+    sideArea: quantity('area', system, 'nonNegative', 'Projected (or effective projected) area seen from the side, at 90 deg to the face: the wind then acts on A_face |cos α| + A_side |sin α| (α between the wind and the face normal). Without it the face area is taken from every direction').optional(),
+    faceDirection: quantity('angle', system, 'planAngle', 'On the pole only, with sideArea: plan direction of the face normal (on an arm the face is square to the arm)').optional(),
     offset: offsetSchema(system).optional(),
   });
 }

@@ -8,7 +8,8 @@ export const RULES = {
   memberWindDiameter: 'pressure × local outside diameter (across flats for multisided), varying linearly along each element',
   panelWind:
     'cosine rule: force normal to the panel face, p × width × height × cos α (α = plan angle between the wind and the face normal); assumption, verify against the governing code',
-  pointWind: 'pressure × effective projected area entered for the attachment, in the wind direction, the same for every direction (input)',
+  pointWind: 'pressure × effective projected area entered for the attachment, in the wind direction, the same for every direction (input; no side area given)',
+  pointWindSides: 'pressure × (A_face |cos α| + A_side |sin α|), α the plan angle between the wind and the face normal, in the wind direction (a projection of the two areas, common practice; verify against the governing code)',
   offsetMoment: 'a force acting at an offset r from the member axis is applied on the axis with the moment r × F (rigid bracket)',
   selfWeight: 'steel area × density × g along the taper, varying linearly along each element',
   iceMembers: 'ice weight per area × outside perimeter of the member (all round the surface)',

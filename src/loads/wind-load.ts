@@ -94,8 +94,15 @@ export function windLoadCase(design: Design, model: FrameModel, dir: WindDirecti
       loads.push(...attachmentLoads(design, model, steps, a, scale(planUnit(a.faceNormal_rad), F), `${tag} on panel`));
     } else {
       const pa = f * pointPressure(design, a, { steps, where: `${a.kind} ${a.id}` });
-      const F = pa * a.windArea_m2;
-      steps.add({ description: `Wind force on ${a.kind} ${a.id}`, symbol: `F_${a.id}`, formula: 'F = p × A', substituted: [qty(pa, 'pressure'), ' × ', qty(a.windArea_m2, 'area')], result: qty(F, 'force'), source: RULES.pointWind });
+      // With a side area the wind meets A_face |cos α| + A_side |sin α|, α from the face normal.
+      const alpha = dir.angle_rad - a.faceNormal_rad;
+      const A = a.sideArea_m2 === null ? a.windArea_m2 : a.windArea_m2 * Math.abs(Math.cos(alpha)) + a.sideArea_m2 * Math.abs(Math.sin(alpha));
+      if (a.sideArea_m2 !== null) {
+        const alphaDeg = ((((alpha * 180) / Math.PI) % 360) + 360) % 360;
+        steps.add({ description: `Wind area of ${a.kind} ${a.id} at the plan angle α = ${alphaDeg.toFixed(1)}° from its face normal`, symbol: `A_${a.id}`, formula: 'A = A_face |cos α| + A_side |sin α|', substituted: [qty(a.windArea_m2, 'area'), ` × ${Math.abs(Math.cos(alpha)).toFixed(4)} + `, qty(a.sideArea_m2, 'area'), ` × ${Math.abs(Math.sin(alpha)).toFixed(4)}`], result: qty(A, 'area'), source: RULES.pointWindSides });
+      }
+      const F = pa * A;
+      steps.add({ description: `Wind force on ${a.kind} ${a.id}`, symbol: `F_${a.id}`, formula: 'F = p × A', substituted: [qty(pa, 'pressure'), ' × ', qty(A, 'area')], result: qty(F, 'force'), source: a.sideArea_m2 === null ? RULES.pointWind : RULES.pointWindSides });
       loads.push(...attachmentLoads(design, model, steps, a, scale(wdir, F), `${tag} on ${a.kind}`));
     }
   }

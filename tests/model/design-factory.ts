@@ -60,6 +60,8 @@ export const testHead = (over: Partial<PointAttachment> = {}): PointAttachment =
   position_m: 8.5,
   weight_N: 250,
   windArea_m2: 0.8,
+  sideArea_m2: null,
+  faceNormal_rad: deg(90),
   offset: { vertical_m: -0.5, lateral_m: 0, direction_rad: 0 },
   ...over,
 });

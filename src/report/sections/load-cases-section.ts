@@ -21,6 +21,7 @@ const RULE_LABEL: Readonly<Record<keyof typeof LOAD_RULES, string>> = {
   memberWindDiameter: 'Projected width of members',
   panelWind: 'Wind on sign panels',
   pointWind: 'Wind on point attachments',
+  pointWindSides: 'Wind on point attachments with a side area',
   offsetMoment: 'Loads off the member axis',
   selfWeight: 'Self-weight of members',
   iceMembers: 'Ice on members',
