@@ -23,7 +23,11 @@ export interface Material {
   readonly density_kgm3: number;
 }
 
-export type BaseFixity = { readonly kind: 'fixed' } | { readonly kind: 'spring'; readonly stiffness_Nm_per_rad: number };
+/** A spring base: rotational stiffness about global X (and about Y unless stiffnessY is given), and
+ * in torsion about Z when torsion is given (absent: fixed in torsion). Translations are fixed. */
+export type BaseFixity =
+  | { readonly kind: 'fixed' }
+  | { readonly kind: 'spring'; readonly stiffness_Nm_per_rad: number; readonly stiffnessY_Nm_per_rad?: number; readonly torsion_Nm_per_rad?: number };
 
 export interface Pole {
   readonly height_m: number;

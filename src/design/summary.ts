@@ -1,4 +1,5 @@
 // A plain-text summary of the normalised design in the user's units, for `polebook check`.
+import { baseText } from './base-text.ts';
 import type { LoadedDesign, TubeSection } from './design.ts';
 import { formatQuantity, formatNumber } from '../units/units.ts';
 import type { Dim } from '../units/units.ts';
@@ -12,7 +13,7 @@ export function summariseDesign(loaded: LoadedDesign): string {
   const lines: string[] = [];
   lines.push(`${loaded.file}: valid (input hash ${loaded.inputHash})`);
   lines.push(`project    ${d.project.name}; structure ${d.project.structureId} (${d.kind}); units ${d.units}`);
-  lines.push(`pole       height ${q(d.pole.height_m, 'length')}; ${section(d.pole.section)}; base ${d.pole.base.kind === 'fixed' ? 'fixed' : `rotational spring ${q(d.pole.base.stiffness_Nm_per_rad, 'rotStiffness')}`}`);
+  lines.push(`pole       height ${q(d.pole.height_m, 'length')}; ${section(d.pole.section)}; base ${baseText(d.pole.base, (k) => q(k, 'rotStiffness'))}`);
   for (const a of d.arms) {
     lines.push(`arm ${a.id.padEnd(6)} at ${q(a.attachHeight_m, 'length')}, plan ${deg(a.direction_rad)}, rise ${deg(a.rise_rad)}, length ${q(a.length_m, 'length')}; ${section(a.section)}`);
   }

@@ -109,7 +109,10 @@ export function momentAreaCheck(design: Design, quadrature: QuadratureSettings =
   const poleSway = integral((z) => (st.poleMoment(z) * (h - z)) / (E * Ipole(z)), h, poleBreaks);
   const armDrop = cosRise * integral((s) => (st.armMoment(s) * (L - s)) / (E * Iarm(s)), L, armBreaks);
 
-  const k = pole.base.kind === 'spring' ? pole.base.stiffness_Nm_per_rad : Infinity;
+  // The base spring about the horizontal axis square to the arm's plane, n = (−sin φ, cos φ, 0):
+  // the in-plane rotation is M n·K⁻¹·n, so k = 1 / (sin²φ / kx + cos²φ / ky).
+  const phi = arm.direction_rad;
+  const k = pole.base.kind === 'spring' ? 1 / (Math.sin(phi) ** 2 / pole.base.stiffness_Nm_per_rad + Math.cos(phi) ** 2 / (pole.base.stiffnessY_Nm_per_rad ?? pole.base.stiffness_Nm_per_rad)) : Infinity;
   const baseRot = Number.isFinite(k) ? st.baseMoment_Nm / k : 0;
   const jointRotation = baseRot + poleRot;
   const jointSway = baseRot * h + poleSway;

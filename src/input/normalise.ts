@@ -169,13 +169,22 @@ function buildBase(input: DesignInput, log: AssumptionLog, problems: Problem[]):
   const fixity = log.take('baseFixity', b?.fixity);
   const path: InputPath = ['structure', 'pole', 'base'];
   if (fixity === 'rotational-spring') {
-    if (b?.rotationalStiffness === undefined) {
-      problems.push(error([...path, 'rotationalStiffness'], 'required key is missing: a rotational-spring base needs its rotationalStiffness'));
+    const both = b?.rotationalStiffness;
+    if (both !== undefined && (b?.rotationalStiffnessX !== undefined || b?.rotationalStiffnessY !== undefined)) {
+      problems.push(error([...path, b?.rotationalStiffnessX !== undefined ? 'rotationalStiffnessX' : 'rotationalStiffnessY'], 'give rotationalStiffness (both horizontal axes) or rotationalStiffnessX and rotationalStiffnessY, not both'));
+    }
+    const kx = b?.rotationalStiffnessX ?? both;
+    const ky = b?.rotationalStiffnessY ?? both;
+    if (kx === undefined || ky === undefined) {
+      const key = both === undefined && b?.rotationalStiffnessX === undefined && b?.rotationalStiffnessY === undefined ? 'rotationalStiffness' : kx === undefined ? 'rotationalStiffnessX' : 'rotationalStiffnessY';
+      problems.push(error([...path, key], 'required key is missing: a rotational-spring base needs its rotationalStiffness (or rotationalStiffnessX and rotationalStiffnessY)'));
       return { kind: 'fixed' };
     }
-    return { kind: 'spring', stiffness_Nm_per_rad: b.rotationalStiffness };
+    return { kind: 'spring', stiffness_Nm_per_rad: kx, ...(ky !== kx ? { stiffnessY_Nm_per_rad: ky } : {}), ...(b?.torsionalStiffness !== undefined ? { torsion_Nm_per_rad: b.torsionalStiffness } : {}) };
   }
-  if (b?.rotationalStiffness !== undefined) problems.push(error([...path, 'rotationalStiffness'], 'rotationalStiffness applies only with fixity: rotational-spring'));
+  for (const key of ['rotationalStiffness', 'rotationalStiffnessX', 'rotationalStiffnessY', 'torsionalStiffness'] as const) {
+    if (b?.[key] !== undefined) problems.push(error([...path, key], `${key} applies only with fixity: rotational-spring`));
+  }
   return { kind: 'fixed' };
 }
 

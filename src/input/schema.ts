@@ -221,7 +221,10 @@ export function buildInputSchema(system: UnitSystem) {
           base: z
             .strictObject({
               fixity: z.enum(['fixed', 'rotational-spring']).meta({ description: `fixed | rotational-spring. ${defaultNote('baseFixity')}` }),
-              rotationalStiffness: quantity('rotStiffness', system, 'positive', 'Rotational stiffness of the base, for rotational-spring').optional(),
+              rotationalStiffness: quantity('rotStiffness', system, 'positive', 'Rotational stiffness of the base about both horizontal axes, for rotational-spring (or give rotationalStiffnessX and rotationalStiffnessY)').optional(),
+              rotationalStiffnessX: quantity('rotStiffness', system, 'positive', 'Rotational stiffness of the base about the global X axis, for rotational-spring').optional(),
+              rotationalStiffnessY: quantity('rotStiffness', system, 'positive', 'Rotational stiffness of the base about the global Y axis, for rotational-spring').optional(),
+              torsionalStiffness: quantity('rotStiffness', system, 'positive', 'Stiffness of the base in torsion about the pole axis, for rotational-spring. Without it the base is fixed in torsion').optional(),
             })
             .optional(),
         }),

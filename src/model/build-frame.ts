@@ -15,8 +15,9 @@
 //   it converged faster than the flexibility-equivalent element in the convergence study,
 //   tests/model/segment-convergence.test.ts). The steel mass per length is the segment's
 //   mean area times density (exact for a linear taper and constant wall).
-// - Base: 'fixed' restrains all six dofs; 'spring' restrains the three translations and
-//   the torsion rz, with rotational springs on rx and ry.
+// - Base: 'fixed' restrains all six dofs; 'spring' restrains the three translations, with
+//   rotational springs on rx and ry (their own stiffnesses) and on rz when a torsional
+//   stiffness is given (else rz is fixed).
 import type { Attachment, Design } from '../design/design.ts';
 import type { FrameElement, FrameModel, FrameNode, LumpedMass, MemberInfo, Support, Vec3 } from './frame.ts';
 import { STANDARD_GRAVITY_mps2 } from './gravity.ts';
@@ -149,8 +150,8 @@ export function buildFrame(design: Design, opts: BuildFrameOptions = {}): FrameM
       ? { node: 0, fixed: [true, true, true, true, true, true], springs: [0, 0, 0, 0, 0, 0] }
       : {
           node: 0,
-          fixed: [true, true, true, false, false, true],
-          springs: [0, 0, 0, design.pole.base.stiffness_Nm_per_rad, design.pole.base.stiffness_Nm_per_rad, 0],
+          fixed: [true, true, true, false, false, design.pole.base.torsion_Nm_per_rad === undefined],
+          springs: [0, 0, 0, design.pole.base.stiffness_Nm_per_rad, design.pole.base.stiffnessY_Nm_per_rad ?? design.pole.base.stiffness_Nm_per_rad, design.pole.base.torsion_Nm_per_rad ?? 0],
         },
   ];
 

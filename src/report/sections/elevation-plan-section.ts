@@ -1,5 +1,6 @@
 // Section "Structure elevation and plan": the structure drawn from the model (members,
 // attachments, the hatched base) with its dimensions, and the attachment centroids as a table.
+import { baseText as restraintText } from '../../design/base-text.ts';
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { Arm, Attachment, Design, LoadedDesign } from '../../design/design.ts';
 import type { Vec3 } from '../../model/frame.ts';
@@ -63,7 +64,7 @@ export function buildScene(design: Design, label: (member: string) => string, ba
 }
 
 function baseText(design: Design, d: Display): string {
-  return design.pole.base.kind === 'fixed' ? 'fixed base' : `base: rotational spring ${d.q(design.pole.base.stiffness_Nm_per_rad, 'rotStiffness')}`;
+  return design.pole.base.kind === 'fixed' ? 'fixed base' : `base: ${restraintText(design.pole.base, (k) => d.q(k, 'rotStiffness'))}`;
 }
 
 /** "+X", "−Y", or the plan angle, for a plan direction. */

@@ -1,5 +1,6 @@
 // Section "Structure geometry": pole, arms, member sections at root and tip, attachments,
 // all in the user's units.
+import { baseText } from '../../design/base-text.ts';
 import type { Arm, LoadedDesign, PanelAttachment, PointAttachment, TubeSection } from '../../design/design.ts';
 import type { Block, DocSection } from '../document.ts';
 import { diameterText, display, memberText, offsetText, positionText, shapeText, type Display } from './display.ts';
@@ -37,7 +38,7 @@ export function geometrySection(loaded: LoadedDesign): DocSection {
     widths: ['*', 190],
     rows: [
       ['Height above the base', d.q(pole.height_m, 'length')],
-      ['Base restraint', pole.base.kind === 'fixed' ? 'fixed' : `rotational spring, ${d.q(pole.base.stiffness_Nm_per_rad, 'rotStiffness')}`],
+      ['Base restraint', baseText(pole.base, (k) => d.q(k, 'rotStiffness'))],
       ['Cross-section', pole.section.shape === 'round' ? 'round tube' : `${pole.section.sides}-sided tube`],
     ],
   });
