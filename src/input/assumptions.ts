@@ -2,7 +2,7 @@
 // package can state each assumption with its source.
 import type { Assumption } from '../design/design.ts';
 import { parseQuantity } from '../units/units.ts';
-import { DEFAULTS, type DefaultDef, type DefaultName } from './defaults.ts';
+import { DEFAULTS, defaultFor, type DefaultDef, type DefaultName } from './defaults.ts';
 
 /** A default's value in SI: quantities are written with their unit, limits as "L/n". */
 export function defaultValueSI(def: DefaultDef): number | string | boolean {
@@ -17,9 +17,12 @@ export function defaultValueSI(def: DefaultDef): number | string | boolean {
 export class AssumptionLog {
   readonly list: Assumption[] = [];
 
+  /** The unit system of the input: an SI input takes the round SI defaults where there are some. */
+  constructor(private readonly system: 'us' | 'si' = 'us') {}
+
   /** The user's value if given, else the default; recorded either way. */
   take<T extends number | string | boolean>(name: DefaultName, given: T | undefined, override: { key?: string; label?: string } = {}): T {
-    const def: DefaultDef = DEFAULTS[name];
+    const def: DefaultDef = defaultFor(DEFAULTS[name], this.system);
     const defaulted = given === undefined;
     const value = (defaulted ? defaultValueSI(def) : given) as T;
     this.list.push({

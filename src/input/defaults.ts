@@ -12,6 +12,8 @@ export interface DefaultDef {
   /** Dimension of a quantity default; absent for plain numbers, booleans and text. */
   readonly dim?: Dim;
   readonly source: string;
+  /** The round SI value taken for an input in SI units, with its own source (not the US number converted). */
+  readonly si?: { readonly value: string; readonly source: string };
 }
 
 const VERIFY = 'verify against the governing code';
@@ -22,6 +24,7 @@ export const DEFAULTS = {
     key: 'structure.material.E',
     label: 'Modulus of elasticity of steel, E',
     value: '29000 ksi',
+    si: { value: '200000 MPa', source: `EN 1993-1-1 value for structural steel (E = 200 000 MPa), from memory; typical value, ${VERIFY}` },
     dim: 'stress',
     source: `AISC 360 value for structural steel (E = 29,000 ksi), from memory; typical value, ${VERIFY}`,
   },
@@ -29,6 +32,7 @@ export const DEFAULTS = {
     key: 'structure.material.G',
     label: 'Shear modulus of steel, G',
     value: '11200 ksi',
+    si: { value: '77000 MPa', source: `EN 1993-1-1 value for structural steel (G ≈ 77 000 MPa, rounded E/(2(1 + 0.3))), from memory; typical value, ${VERIFY}` },
     dim: 'stress',
     source: `AISC 360 value for structural steel (G = 11,200 ksi), from memory; typical value, ${VERIFY}`,
   },
@@ -38,11 +42,13 @@ export const DEFAULTS = {
     value: '50 ksi',
     dim: 'stress',
     source: 'typical value (ASTM A572 Grade 50 plate formed into tubes, from memory); verify against the steel specified on the drawings',
+    si: { value: '355 MPa', source: 'typical value (EN 10025 grade S355 steel, thickness up to 16 mm, from memory); verify against the steel specified on the drawings' },
   },
   materialDensity: {
     key: 'structure.material.density',
     label: 'Density of steel',
     value: '490 pcf',
+    si: { value: '7850 kg/m3', source: 'density of steel, 7850 kg/m³ (EN 1991-1-1, from memory); typical value, verify' },
     dim: 'density',
     source: 'common practice (unit weight of steel 490 lb/ft3 as tabulated in the AISC Steel Construction Manual, from memory)',
   },
@@ -355,7 +361,12 @@ export type DefaultName = keyof typeof DEFAULTS;
 /** "default: 29000 ksi (source)" for the JSON Schema description of a key. */
 export function defaultNote(name: DefaultName): string {
   const d: DefaultDef = DEFAULTS[name];
-  return `Default: ${String(d.value)} (${d.source})`;
+  return d.si ? `Default: ${String(d.value)} with units: us (${d.source}); ${d.si.value} with units: si (${d.si.source})` : `Default: ${String(d.value)} (${d.source})`;
+}
+
+/** The default as taken for an input in the given unit system. */
+export function defaultFor(d: DefaultDef, system: 'us' | 'si'): DefaultDef {
+  return system === 'si' && d.si ? { ...d, value: d.si.value, source: d.si.source } : d;
 }
 
 export const COMBINATION_SOURCE = `default, ${VERIFY}; factors from memory of AASHTO LRFD-LTS Table 3.4.1-1 (load combinations and load factors)`;

@@ -34,7 +34,7 @@ export interface NormaliseResult {
 
 export function normalise(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?: string }): NormaliseResult {
   const problems: Problem[] = [];
-  const log = new AssumptionLog();
+  const log = new AssumptionLog(input.units);
   const system: UnitSystem = input.units;
   const len = (v: number) => formatQuantity(v, 'length', system);
 

@@ -107,13 +107,18 @@ describe('defaults and assumptions', () => {
       if (a.defaulted) expect(a.source).toMatch(/verify|common practice|polebook default|from memory/);
       else expect(a.source).toMatch(/^(input|computed from)/);
     }
-    const E = d.assumptions.find((a) => a.key === 'structure.material.E');
+    // A US input without material takes the US defaults; an SI input the round SI values.
+    const us = loadDesignText(readFileSync('tests/fixtures/luminaire-twin-us.yaml', 'utf8').replace(/  material:[^\n]*\n(    [^\n]*\n)+/, ''), 'us.yaml', {}).design;
+    const E = us.assumptions.find((a) => a.key === 'structure.material.E');
     expect(E).toMatchObject({ defaulted: true, dim: 'stress', source: DEFAULTS.materialE.source });
     // 29000 ksi = 29000 x 6.894757 MPa (NIST SP 811), to the 7 printed digits.
     expect(Math.abs((E?.value as number) / 1e6 / 29000 - 6.894757)).toBeLessThan(0.5e-6);
-    expect(d.material.E_Pa).toBe(E?.value);
-    const density = d.assumptions.find((a) => a.key === 'structure.material.density');
+    expect(us.material.E_Pa).toBe(E?.value);
+    const density = us.assumptions.find((a) => a.key === 'structure.material.density');
     expect(Math.abs((density?.value as number) / 490 - 16.01846)).toBeLessThan(0.5e-5); // NIST: 1 pcf = 16.01846 kg/m3
+    const si = loadDesignText(readFileSync('examples/luminaire-twin.yaml', 'utf8').replace(/  material:[^\n]*\n(    [^\n]*\n)+/, ''), 'si.yaml', {}).design;
+    expect(si.material).toEqual({ E_Pa: 200e9, G_Pa: 77e9, Fy_Pa: 355e6, density_kgm3: 7850 });
+    expect(si.assumptions.find((a) => a.key === 'structure.material.E')).toMatchObject({ defaulted: true, source: DEFAULTS.materialE.si!.source });
     const sign = loadDesignFile('examples/cantilever-sign.yaml').design;
     expect(sign.assumptions.find((a) => a.key === 'structure.material.yieldStrength')).toMatchObject({ defaulted: false, source: 'input' });
   });
@@ -141,7 +146,8 @@ describe('defaults and assumptions', () => {
   });
 
   it('G from the Poisson ratio: G = E / (2 (1 + nu))', () => {
-    const text = swap(TWIN, 'structure:\n  kind: luminaire-pole\n', 'structure:\n  kind: luminaire-pole\n  material: { E: 200000, poissonRatio: 0.3 }\n');
+    const text = TWIN.replace(/  material:[^\n]*\n(    [^\n]*\n)+/, '  material: { E: 200000, poissonRatio: 0.3 }\n');
+    expect(text).toContain('poissonRatio');
     const d = loadDesignText(text, 'x.yaml', {}).design;
     expect(d.material.G_Pa).toBeCloseTo(200e9 / 2.6, 0);
   });
