@@ -4,15 +4,17 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { packageRoot } from '../package-root.ts';
 import type { StructureKind } from '../design/design.ts';
+import type { UnitSystem } from '../units/units.ts';
 import { STRUCTURE_KIND_VALUES } from './schema.ts';
 
 export const STRUCTURE_KINDS: readonly StructureKind[] = STRUCTURE_KIND_VALUES;
 
-export function starterPath(kind: StructureKind): string {
-  return join(packageRoot(), 'templates', 'starters', `${kind}.yaml`);
+/** US starters under templates/starters/, SI starters (round SI values) under templates/starters/si/. */
+export function starterPath(kind: StructureKind, units: UnitSystem = 'us'): string {
+  return join(packageRoot(), 'templates', 'starters', ...(units === 'si' ? ['si'] : []), `${kind}.yaml`);
 }
 
-export function starterInput(kind: StructureKind): string {
+export function starterInput(kind: StructureKind, units: UnitSystem = 'us'): string {
   if (!STRUCTURE_KINDS.includes(kind)) throw new Error(`unknown structure kind '${kind}'; expected ${STRUCTURE_KINDS.join(', ')}`);
-  return readFileSync(starterPath(kind), 'utf8');
+  return readFileSync(starterPath(kind, units), 'utf8');
 }

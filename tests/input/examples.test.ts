@@ -41,6 +41,16 @@ describe('examples and starters', () => {
   });
 
   for (const kind of STRUCTURE_KINDS) {
+    it(`SI starter for ${kind} (polebook new --units si) loads as that kind in SI units, without warnings`, () => {
+      const text = starterInput(kind, 'si');
+      expect(text).toBe(readFileSync(`templates/starters/si/${kind}.yaml`, 'utf8'));
+      const loaded = loadDesignText(text, `${kind}.yaml`, {});
+      expect(loaded.design.kind).toBe(kind);
+      expect(loaded.design.units).toBe('si');
+      expect(loaded.warnings).toEqual([]);
+      // Round SI values, not converted US numbers: the steel is S355 at 355 MPa.
+      expect(loaded.design.material.Fy_Pa).toBe(355e6);
+    });
     it(`starter for ${kind} is the template file, commented, and loads as that kind`, () => {
       const text = starterInput(kind);
       expect(text).toBe(readFileSync(`templates/starters/${kind}.yaml`, 'utf8'));
