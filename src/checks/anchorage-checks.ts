@@ -10,7 +10,7 @@ import type { DesignAnalysis } from '../analyse-design.ts';
 import type { Combination } from '../loads/load-types.ts';
 import type { Vec6 } from '../model/frame.ts';
 import { isFactored } from '../design/combination-use.ts';
-import { boltThread, stressArea, threadName, threadSource, type BoltThread } from '../design/thread-tables.ts';
+import { boltThread, stressArea, stressDiameter, threadName, threadSource, type BoltThread } from '../design/thread-tables.ts';
 import { makeRecord, type CheckedRecords } from './check-record.ts';
 import type { CheckType } from './check-types.ts';
 import { baseActions, boltForces, type BaseActions, type BoltForces } from './anchor/bolt-group.ts';
@@ -33,7 +33,7 @@ export function boltGeometry(bolts: AnchorBolts): BoltGeometry | { readonly cann
   const thread = boltThread(bolts);
   if (thread === null) return { cannot: 'the bolt diameter is not a standard UNC (1/2 in to 4 in) or ISO coarse (M12 to M72) size: give criteria.anchorBolts.threadsPerInch or pitch for its thread' };
   const d = bolts.boltDiameter_m;
-  if (!(d - 0.9743 * thread.pitch_m > 0) || !(d - 0.9382 * thread.pitch_m > 0)) return { cannot: 'the thread pitch is too coarse for the bolt diameter: the thread leaves no stress area' };
+  if (!(stressDiameter(d, thread) > 0)) return { cannot: 'the thread pitch is too coarse for the bolt diameter: the thread leaves no stress area' };
   return { bolts, thread, areas: { Ab_m2: (Math.PI / 4) * d * d, At_m2: stressArea(d, thread) } };
 }
 

@@ -39,6 +39,10 @@ export const isoStressArea = (d_m: number, pitch_m: number): number => (Math.PI 
 
 export const stressArea = (d_m: number, t: BoltThread): number => (t.standard === 'UNC' ? uncStressArea(d_m, t.pitch_m) : isoStressArea(d_m, t.pitch_m));
 
+/** The diameter the stress area is taken on, d − 0.9743 p (UNC) or d − 0.9382 P (ISO); zero or
+ * less when the pitch is too coarse for the diameter. */
+export const stressDiameter = (d_m: number, t: BoltThread): number => d_m - (t.standard === 'UNC' ? 0.9743 : 0.9382) * t.pitch_m;
+
 /** The thread of the bolts: as given, else the coarse thread of a standard size (UNC first for a
  * size that is an inch size, ISO for a millimetre size); null when the size is in neither table. */
 export function boltThread(b: Pick<AnchorBolts, 'boltDiameter_m' | 'thread'>): BoltThread | null {

@@ -7,7 +7,8 @@ import { MAX_INPUT_BYTES } from './size-limits.ts';
 import { unsafeCharacter } from './text-safety.ts';
 import { error, type InputPath, type Problem } from './problem.ts';
 
-const fileLevel = (file: string, message: string, line = 1, col = 1): Diagnostic => ({ file, line, col, path: '', message, severity: 'error' });
+/** A refusal at a byte of the file, before any key can be named. */
+const atByte = (file: string, message: string, line: number, col: number): Diagnostic => ({ file, line, col, path: '', message, severity: 'error' });
 
 /** A whole-file refusal names the file, not a made-up line and column. */
 export function sizeProblem(file: string, bytes: number): FileLevelError | undefined {
@@ -40,12 +41,12 @@ export function decodeInput(file: string, bytes: Uint8Array): string {
   for (let i = 0; i < bytes.length; ) {
     const c = bytes[i]!;
     if (c === 0x00) {
-      throw new InputError([fileLevel(file, `the file is not text: it has a NUL byte at line ${line}, byte ${i - lineStart + 1} of the line (a binary file, or text saved as UTF-16?); expected a YAML or JSON input in UTF-8`, line, i - lineStart + 1)]);
+      throw new InputError([atByte(file, `the file is not text: it has a NUL byte at line ${line}, byte ${i - lineStart + 1} of the line (a binary file, or text saved as UTF-16?); expected a YAML or JSON input in UTF-8`, line, i - lineStart + 1)]);
     }
     const n = utf8Length(bytes, i);
     if (n === 0) {
       const hex = `0x${c.toString(16).toUpperCase().padStart(2, '0')}`;
-      throw new InputError([fileLevel(file, `the file is not UTF-8 text: byte ${hex} at line ${line}, byte ${i - lineStart + 1} of the line, is not UTF-8 (a Latin-1 or Windows-1252 letter such as é?); save the file as UTF-8`, line, i - lineStart + 1)]);
+      throw new InputError([atByte(file, `the file is not UTF-8 text: byte ${hex} at line ${line}, byte ${i - lineStart + 1} of the line, is not UTF-8 (a Latin-1 or Windows-1252 letter such as é?); save the file as UTF-8`, line, i - lineStart + 1)]);
     }
     if (c === 0x0a) {
       line++;

@@ -14,7 +14,7 @@ import { attachmentLoads, planUnit } from './attachment-loads.ts';
 import { iceWindCaseId, windCaseId } from './case-ids.ts';
 import type { AppliedLoad, LoadCase } from './load-types.ts';
 import { RULES } from './load-rules.ts';
-import { memberPressure, panelPressure, pointPressure } from './wind-pressure.ts';
+import { memberPressure, memberPressureIsTyped, panelPressure, pointPressure } from './wind-pressure.ts';
 import { loadResultant } from './load-resultant.ts';
 
 /** sin θ below this: the member is taken as parallel to the wind (no load). */
@@ -65,8 +65,10 @@ export function windLoadCase(design: Design, model: FrameModel, dir: WindDirecti
     const Dt = diameterAt(ax.section, ax.length_m, ax.length_m);
     const zAt = (s: number) => ax.origin_m[2] + s * ax.direction[2];
     const ends = [['root', Dr, zAt(0)], ['tip', Dt, zAt(ax.length_m)]] as const;
+    const w_ends: number[] = [];
     for (const [where, D, z] of ends) {
       const p = f * memberPressure(design, ax.id, ax.section, z, D, { steps, where: `${name} ${where}` });
+      w_ends.push(p * D * s2);
       steps.add({ description: `Wind force per length on the ${name} at its ${where}`, symbol: `w_${where}`, formula: projected ? 'w = p D sin θ' : 'w = p D sin²θ', substituted: [qty(p, 'pressure'), ' × ', qty(D, 'section'), projected ? ' × sin(' : ' × sin²(', qty(theta, 'angle'), ')'], result: qty(p * D * s2, 'lineLoad'), source: `${rule}; ${RULES.memberWindDiameter}` });
     }
     const direction = projected ? wdir : sinT < PARALLEL_SIN ? wdir : scale(n, 1 / sinT);
@@ -81,7 +83,15 @@ export function windLoadCase(design: Design, model: FrameModel, dir: WindDirecti
       // The member axis is straight, so each element shares its direction.
       if (sinT >= PARALLEL_SIN) loads.push({ kind: 'distributed', element: id, axes: 'global', direction, wA_Npm: wA, wB_Npm: wB, a_m: 0, b_m: e.length_m, origin });
     }
-    steps.add({ description: `Wind force on the ${name}, ${projected ? 'in the wind direction' : 'normal to its axis'}`, symbol: `F_${ax.id}`, formula: 'F = Σ L_e (w_i + w_j) / 2 over the elements', substituted: [`${info.elements.length} elements`], result: qty(sinT >= PARALLEL_SIN ? total : 0, 'force'), source: 'integral of the load, linear along each element' });
+    const F = sinT >= PARALLEL_SIN ? total : 0;
+    const what = `Wind force on the ${name}, ${projected ? 'in the wind direction' : 'normal to its axis'}`;
+    // A typed pressure gives a load linear along the whole member, reworkable from its two ends;
+    // a pressure from the wind speed varies with height, so the force is the sum over the elements.
+    if (memberPressureIsTyped(design, ax.id)) {
+      steps.add({ description: what, symbol: `F_${ax.id}`, formula: 'F = L (w_root + w_tip) / 2', substituted: [qty(ax.length_m, 'length'), ' × (', qty(w_ends[0]!, 'lineLoad'), ' + ', qty(w_ends[1]!, 'lineLoad'), ') / 2'], result: qty(F, 'force'), source: 'integral of a linearly varying load' });
+    } else {
+      steps.add({ description: `${what}: the pressure changes with height, so the load is summed over the ${info.elements.length} elements`, symbol: `F_${ax.id}`, formula: 'F = Σ L_e (w_i + w_j) / 2', substituted: [`${info.elements.length} elements, w at each element end as above`], result: qty(F, 'force'), source: 'integral of the load, linear along each element' });
+    }
   }
 
   for (const a of design.attachments) {

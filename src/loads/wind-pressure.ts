@@ -43,11 +43,20 @@ function pressureStep(design: Design, out: PressureSteps, Kz: number, Cd: number
 
 /** Pressure on a member at height z where its outside diameter (across flats) is D: the member's
  * own pressure, else the class pressure, else from the wind speed (with the member's own drag if given). */
+const ownWind = (design: Design, member: string) => (member === 'pole' ? design.pole.wind : design.arms.find((a) => a.id === member)?.wind);
+
+/** The member's own pressure or the class pressure, when one is typed; null: from the wind speed. */
+function typedMemberPressure(design: Design, member: string): number | null {
+  return ownWind(design, member)?.pressure_Pa ?? design.wind.membersPressure_Pa;
+}
+
+/** Whether a member's pressure is typed (the same at every height). */
+export const memberPressureIsTyped = (design: Design, member: string): boolean => typedMemberPressure(design, member) !== null;
+
 export function memberPressure(design: Design, member: string, section: TubeSection, z_m: number, D_m: number, out?: PressureSteps): number {
-  const own = member === 'pole' ? design.pole.wind : design.arms.find((a) => a.id === member)?.wind;
-  if (own?.pressure_Pa != null) return own.pressure_Pa;
-  const typed = design.wind.membersPressure_Pa;
+  const typed = typedMemberPressure(design, member);
   if (typed !== null) return typed;
+  const own = ownWind(design, member);
   const { q, Kz } = velocityPressure(design, z_m, out);
   let Cd: number;
   if (own?.drag != null) {

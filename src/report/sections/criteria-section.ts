@@ -2,6 +2,7 @@
 // settings, and every assumption with its value, whether it was given or defaulted, and its source.
 import type { AnchorBolts, LoadedDesign } from '../../design/design.ts';
 import { boltThread, threadName } from '../../design/thread-tables.ts';
+import { bendingApplies } from '../../checks/anchor/bolt-bending.ts';
 import { formatNumber } from '../../units/units.ts';
 import type { Block, DocSection } from '../document.ts';
 import { assumptionValue, display, fractionText } from './display.ts';
@@ -58,7 +59,7 @@ export function criteriaSection(loaded: LoadedDesign, secondOrder: boolean): Doc
   if (bolts === null) {
     blocks.push({ kind: 'paragraph', text: 'No anchor bolts were entered (criteria.anchorBolts), so the anchor bolts and the base plate are not checked in this package: the factored base reactions and the foundation design envelope in the results are the forces to check them with.' });
   } else {
-    blocks.push({ kind: 'paragraph', text: 'The anchor bolts and base plate below are checked for every factored combination from the base reaction (see the design checks). Their embedment in the concrete and the foundation are not checked.' });
+    blocks.push({ kind: 'paragraph', text: `The anchor bolts below${c.basePlate !== null ? ' and the base plate' : ''} are checked for every factored combination from the base reaction (see the design checks)${bendingApplies(bolts) ? ', the bolts also in bending over the stand-off' : ''}. Their embedment in the concrete and the foundation are not checked.` });
     blocks.push({
       kind: 'table',
       title: 'Anchor bolts',
