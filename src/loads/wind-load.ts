@@ -88,9 +88,9 @@ export function windLoadCase(design: Design, model: FrameModel, dir: WindDirecti
     // A typed pressure gives a load linear along the whole member, reworkable from its two ends;
     // a pressure from the wind speed varies with height, so the force is the sum over the elements.
     if (memberPressureIsTyped(design, ax.id)) {
-      steps.add({ description: what, symbol: `F_${ax.id}`, formula: 'F = L (w_root + w_tip) / 2', substituted: [qty(ax.length_m, 'length'), ' × (', qty(w_ends[0]!, 'lineLoad'), ' + ', qty(w_ends[1]!, 'lineLoad'), ') / 2'], result: qty(F, 'force'), source: 'integral of a linearly varying load' });
+      steps.add({ description: what, symbol: `F_${ax.id}`, formula: 'L (w_root + w_tip) / 2', substituted: [qty(ax.length_m, 'length'), ' × (', qty(w_ends[0]!, 'lineLoad'), ' + ', qty(w_ends[1]!, 'lineLoad'), ') / 2'], result: qty(F, 'force'), source: 'integral of a linearly varying load' });
     } else {
-      steps.add({ description: `${what}: the pressure changes with height, so the load is summed over the ${info.elements.length} elements`, symbol: `F_${ax.id}`, formula: 'F = Σ L_e (w_i + w_j) / 2', substituted: [`${info.elements.length} elements, w at each element end as above`], result: qty(F, 'force'), source: 'integral of the load, linear along each element' });
+      steps.add({ description: `${what}: the pressure changes with height, so the load is summed over the ${info.elements.length} elements`, symbol: `F_${ax.id}`, formula: 'Σ L_e (w_i + w_j) / 2', substituted: [`${info.elements.length} elements, w at each element end as above`], result: qty(F, 'force'), source: 'integral of the load, linear along each element' });
     }
   }
 
