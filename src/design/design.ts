@@ -55,6 +55,9 @@ export interface Arm {
   readonly direction_rad: number;
   /** Length along the arm axis from the pole face to the tip. */
   readonly length_m: number;
+  /** How the drawing dimensioned the arm: from the pole face (absent: face) or from the pole axis,
+   * in which case the face radius at the attachment height was taken off the length and positions. */
+  readonly lengthFrom?: 'face' | 'axis';
   /** Rise angle above horizontal. */
   readonly rise_rad: number;
   readonly section: TubeSection;

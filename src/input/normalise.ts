@@ -75,7 +75,7 @@ export function normalise(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?
       return;
     }
     const section = buildSection(a.section, a.length - shift, [...path, 'section'], system, problems);
-    if (section) arms.push({ id: a.id, attachHeight_m: a.attachHeight, direction_rad: a.direction, length_m: a.length - shift, rise_rad: rise, section, wind: { pressure_Pa: a.windPressure ?? null, drag: a.drag ?? null } });
+    if (section) arms.push({ id: a.id, attachHeight_m: a.attachHeight, direction_rad: a.direction, length_m: a.length - shift, lengthFrom: from, rise_rad: rise, section, wind: { pressure_Pa: a.windPressure ?? null, drag: a.drag ?? null } });
   });
 
   const attachments = buildAttachments(input, arms, armShift, system, problems, log);

@@ -29,6 +29,12 @@ export function poleFaceRadius(design: Design, z_m: number): number {
   return diameterAt(design.pole.section, design.pole.height_m, z_m) / 2;
 }
 
+/** What turns an arm's face-measured length and positions back into those entered: the pole face
+ * radius at the arm for an arm dimensioned from the pole axis, 0 for one dimensioned from the face. */
+export function armLengthShift(design: Design, arm: Arm): number {
+  return arm.lengthFrom === 'axis' ? poleFaceRadius(design, arm.attachHeight_m) : 0;
+}
+
 export function armAxis(design: Design, arm: Arm): MemberAxis {
   const r = poleFaceRadius(design, arm.attachHeight_m);
   const c = Math.cos(arm.direction_rad);

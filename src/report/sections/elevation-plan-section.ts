@@ -4,7 +4,7 @@ import { baseText as restraintText } from '../../design/base-text.ts';
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { Arm, Attachment, Design, LoadedDesign } from '../../design/design.ts';
 import type { Vec3 } from '../../model/frame.ts';
-import { armAxis, findAxis, offsetVector, pointOnAxis, poleAxis } from '../../model/member-axes.ts';
+import { armAxis, findAxis, offsetVector, pointOnAxis, poleAxis, armLengthShift } from '../../model/member-axes.ts';
 import { add } from '../../model/vec3.ts';
 import { elevationDrawing, planDrawing, type HeightDim, type MemberDims, type Scene, type SceneAttachment, type SceneMember } from '../figures/structure-drawing.ts';
 import type { Block, DocSection } from '../document.ts';
@@ -98,14 +98,35 @@ function armDims(design: Design, arm: Arm, side: 'above' | 'below', d: Display):
     const reach = side === 'below' ? -(a.offset.vertical_m - half) : a.offset.vertical_m + half;
     clearance = Math.max(clearance, reach);
   }
+  // Dimensions as the drawing gave them: from the pole axis they start at the axis and add the face radius.
+  const shift = armLengthShift(design, arm);
+  const from = pointOnAxis(ax, -shift);
+  const where = shift > 0 ? ' from pole axis' : '';
   return {
     side,
     clearance_m: clearance,
     rows: [
-      ...on.map((a) => ({ from: ax.origin_m, to: pointOnAxis(ax, a.position_m), text: `${a.id}: ${d.q(a.position_m, 'length')}` })),
-      { from: ax.origin_m, to: pointOnAxis(ax, arm.length_m), text: `arm ${arm.id}: ${d.q(arm.length_m, 'length')}` },
+      ...on.map((a) => ({ from, to: pointOnAxis(ax, a.position_m), text: `${a.id}: ${d.q(a.position_m + shift, 'length')}${where}` })),
+      { from, to: pointOnAxis(ax, arm.length_m), text: `arm ${arm.id}: ${d.q(arm.length_m + shift, 'length')}${where}` },
     ],
   };
+}
+
+function positionText(design: Design, a: Attachment, d: Display): string {
+  if (a.member === 'pole') return `${d.q(a.position_m, 'length')} above base` + (a.offset.vertical_m !== 0 ? `, centroid ${d.q(Math.abs(a.offset.vertical_m), 'length')} ${a.offset.vertical_m > 0 ? 'above' : 'below'}` : '');
+  const arm = design.arms.find((x) => x.id === a.member);
+  const shift = arm ? armLengthShift(design, arm) : 0;
+  return shift > 0
+    ? `${d.q(a.position_m + shift, 'length')} from pole axis (${d.q(a.position_m, 'length')} from face)`
+    : `${d.q(a.position_m, 'length')} from pole face`;
+}
+
+/** Where the arms' dimensions start, as entered. */
+function armOriginText(design: Design): string {
+  const axis = design.arms.filter((a) => a.lengthFrom === 'axis').map((a) => a.id);
+  if (axis.length === 0) return 'from the pole face';
+  if (axis.length === design.arms.length) return 'from the pole axis';
+  return `from the pole axis for ${axis.length === 1 ? 'arm' : 'arms'} ${axis.join(', ')}, from the pole face for the others`;
 }
 
 export function elevationPlanSection(loaded: LoadedDesign, analysis: DesignAnalysis): DocSection {
@@ -126,7 +147,7 @@ export function elevationPlanSection(loaded: LoadedDesign, analysis: DesignAnaly
   const plan = planDrawing(buildScene(design, (m) => (m === 'pole' ? 'pole' : `${m} (${d.angle(design.arms.find((a) => a.id === m)?.direction_rad ?? 0)})`), ''));
   const outOfPlane = design.arms.filter((a) => !inPlane.includes(a));
   const blocks: Block[] = [
-    ...templateBlocks('elevation-plan', { unitSystem: design.units === 'us' ? 'US customary' : 'SI' }).blocks,
+    ...templateBlocks('elevation-plan', { unitSystem: design.units === 'us' ? 'US customary' : 'SI', armOrigin: armOriginText(design) }).blocks,
     {
       kind: 'figure',
       title: 'Elevation',
@@ -157,7 +178,7 @@ export function elevationPlanSection(loaded: LoadedDesign, analysis: DesignAnaly
       widths: [60, 50, '*', 62, 62, 62],
       rows: design.attachments.map((a) => {
         const s = sceneAttachment(design, a);
-        return [a.id, memberText(a.member), a.member === 'pole' ? `${d.q(a.position_m, 'length')} above base` : `${d.q(a.position_m, 'length')} from pole face`, ...vecText(s.centre, 'length', d)];
+        return [a.id, memberText(a.member), positionText(design, a, d), ...vecText(s.centre, 'length', d)];
       }),
       note: 'The centroid is the point on the member axis at the attachment position plus the offset entered for the attachment; loads act there.',
     });

@@ -3,11 +3,13 @@
 // segment convergence study and the supports.
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { LoadedDesign, TubeSection } from '../../design/design.ts';
-import { memberAxes } from '../../model/member-axes.ts';
+import { armLengthShift, memberAxes } from '../../model/member-axes.ts';
 import { segmentConvergence } from '../../model/segment-convergence.ts';
 import { sectionAt } from '../../model/taper.ts';
 import type { TubeProperties } from '../../model/tube-section.ts';
 import { formatNumber, toSI, displayUnit } from '../../units/units.ts';
+import { baseText as restraintText } from '../../design/base-text.ts';
+import { conventionsSketch } from '../figures/conventions-sketch.ts';
 import { memberAxesSketch } from '../figures/member-axes-sketch.ts';
 import type { Block, DocSection } from '../document.ts';
 import { diameterText, display, memberText, shapeText, type Display } from './display.ts';
@@ -55,6 +57,37 @@ function axesBlocks(): Block[] {
   ];
 }
 
+/** The conventions the input used, drawn, and each structure's own in words. */
+function conventionBlocks(loaded: LoadedDesign, d: Display): Block[] {
+  const { design } = loaded;
+  const base = design.pole.base;
+  const sketch = conventionsSketch({
+    baseSprings: base.kind === 'spring' ? { aboutY: base.stiffnessY_Nm_per_rad !== undefined, torsion: base.torsion_Nm_per_rad !== undefined } : null,
+  });
+  const armLines = design.arms.map((a) => {
+    const r = armLengthShift(design, a);
+    return r > 0
+      ? `arm ${a.id}: length and positions entered from the pole axis; r = ${d.q(r, 'section')} taken off (${d.q(a.length_m + r, 'length')} from the axis = ${d.q(a.length_m, 'length')} from the face), rise ${d.angle(a.rise_rad)}`
+      : `arm ${a.id}: length and positions entered from the pole face (${d.q(a.length_m, 'length')}), rise ${d.angle(a.rise_rad)}`;
+  });
+  const raised = design.attachments.filter((a) => a.member === 'pole' && a.offset.vertical_m !== 0);
+  const poleLine =
+    raised.length > 0
+      ? `on the pole, centroids offset vertically from their brackets: ${raised.map((a) => `${a.id} ${a.offset.vertical_m > 0 ? '+' : '−'}${d.q(Math.abs(a.offset.vertical_m), 'length')}`).join(', ')}`
+      : 'no attachment on the pole is offset vertically from its bracket';
+  const baseLine = `base: ${restraintText(base, (k) => d.q(k, 'rotStiffness'))}`;
+  return [
+    { kind: 'heading', level: 2, text: 'How the input dimensions the structure' },
+    {
+      kind: 'figure',
+      title: 'Input conventions: arm lengths, attachments on the pole, the base',
+      svg: sketch.svg,
+      width_pt: sketch.width,
+      caption: `Not to scale. This structure: ${[...armLines, poleLine, baseLine].join('; ')}.`,
+    },
+  ];
+}
+
 function memberBlocks(loaded: LoadedDesign, analysis: DesignAnalysis, d: Display): Block[] {
   const { design } = loaded;
   const rows = memberAxes(design).map((ax) => {
@@ -76,7 +109,7 @@ function memberBlocks(loaded: LoadedDesign, analysis: DesignAnalysis, d: Display
       header: ['Member', 'Length', 'Prismatic elements', 'Section at root', 'Section at tip'],
       widths: [50, 50, 58, '*', '*'],
       rows,
-      note: 'Length of the pole: base to top. Length of an arm: pole face to tip, along its axis. The element count includes the extra nodes at attachments and arm connections.',
+      note: 'Length of the pole: base to top. Length of an arm: pole face to tip, along its axis (an arm entered from the pole axis is shown here from the face; see the input conventions above). The element count includes the extra nodes at attachments and arm connections.',
     },
   ];
 }
@@ -173,6 +206,7 @@ export function structuralModelSection(loaded: LoadedDesign, analysis: DesignAna
     blocks: [
       ...methodBlocks(loaded, analysis, d),
       ...axesBlocks(),
+      ...conventionBlocks(loaded, d),
       ...memberBlocks(loaded, analysis, d),
       ...propertyBlocks(loaded, d),
       ...convergenceBlocks(loaded, analysis, d),
