@@ -35,8 +35,10 @@ export function movementWarningLines(design: Design, a: DesignAnalysis): string[
   const q = (si: number, dim: Parameters<typeof formatQuantity>[1]) => formatQuantity(si, dim, design.units);
   return worstPerMember(a.model, largeMovements(a.model, a.results)).map((x) => {
     const tip = x.member === 'pole' ? 'pole top' : `${memberName(x.member)} tip`;
+    // An arm's length in the model runs from the pole face, whatever the input measured it from.
+    const from = x.member === 'pole' ? '' : ' from the pole face';
     return (
-      `warning: ${tip} moves ${q(x.movement_m, 'length')} under ${x.combination}, ${formatNumber(x.ratio, 3)} of its length ${q(x.length_m, 'length')}, ` +
+      `warning: ${tip} moves ${q(x.movement_m, 'length')} under ${x.combination}, ${formatNumber(x.ratio, 3)} of its length ${q(x.length_m, 'length')}${from}, ` +
       `beyond our limit of L/${formatNumber(1 / SMALL_DISPLACEMENT_LIMIT)} for a small-displacement analysis: its results are outside the method`
     );
   });

@@ -31,7 +31,9 @@ describe('examples and starters', () => {
     expect(Math.abs(twin.arms[0].direction_rad - twin.arms[1].direction_rad)).toBeCloseTo(Math.PI, 12);
     const signal = loadDesignFile('examples/signal-support.yaml').design;
     expect(signal.pole.section).toMatchObject({ shape: 'multisided', sides: 12 });
-    expect(signal.attachments.filter((a) => a.kind === 'signal-head')).toHaveLength(3);
+    expect(signal.attachments.filter((a) => a.kind === 'signal-head' && a.member === 'SA')).toHaveLength(3);
+    expect(signal.attachments.filter((a) => a.kind === 'signal-head' && a.member === 'pole')).toHaveLength(1);
+    expect(signal.arms[0].lengthFrom).toBe('axis');
     expect(signal.attachments.filter((a) => a.kind === 'panel')).toHaveLength(1);
     expect(signal.arms.map((a) => a.id)).toEqual(['SA', 'LA']);
   });
