@@ -1,5 +1,6 @@
 // Validated input (schema output, already in SI) -> the normalised Design, with the
 // checks that the geometry can be built and the assumptions recorded.
+import { TUBE_STEEL_GRADE_SOURCE, tubeSteelYield } from '../design/tube-steel-grades.ts';
 import type {
   AnalysisSettings, Arm, Attachment, BaseFixity, CombinationSpec, Design, FatigueInput, IceInput, Material,
   Offset, Pole, Project, StructureKind, WindInput,
@@ -161,7 +162,14 @@ function buildMaterial(input: DesignInput, log: AssumptionLog, problems: Problem
       defaulted: false,
     });
   } else G = log.take('materialG', m.G);
-  return { E_Pa: E, G_Pa: G, Fy_Pa: log.take('materialFy', m.yieldStrength), density_kgm3: log.take('materialDensity', m.density) };
+  let Fy: number;
+  const gradeFy = m.grade === undefined ? undefined : tubeSteelYield(m.grade);
+  if (gradeFy !== undefined) {
+    if (m.yieldStrength !== undefined) problems.push(error(['structure', 'material', 'yieldStrength'], 'give the steel grade or the yield strength, not both: the grade sets it'));
+    Fy = gradeFy;
+    log.note({ key: 'structure.material.grade', label: `Minimum yield strength of the tube steel, grade ${m.grade}, Fy`, value: Fy, dim: 'stress', source: TUBE_STEEL_GRADE_SOURCE, defaulted: false });
+  } else Fy = log.take('materialFy', m.yieldStrength);
+  return { E_Pa: E, G_Pa: G, Fy_Pa: Fy, density_kgm3: log.take('materialDensity', m.density) };
 }
 
 function buildBase(input: DesignInput, log: AssumptionLog, problems: Problem[]): BaseFixity {

@@ -2,6 +2,7 @@
 // types, the defaults (noted in descriptions, taken from defaults.ts) and the JSON Schema
 // that `polebook schema` prints. Quantities are read in the file's unit system, so the
 // schema is built per system; both give the same JSON Schema.
+import { TUBE_STEEL_GRADES } from '../design/tube-steel-grades.ts';
 import { MAX_ADDED_WIND_DIRECTIONS, MAX_ARMS, MAX_COMBINATIONS, MAX_PANELS, MAX_POINTS, MAX_REVISIONS, listLimit } from './size-limits.ts';
 import { z } from 'zod';
 import type { UnitSystem } from '../units/units.ts';
@@ -210,7 +211,8 @@ export function buildInputSchema(system: UnitSystem) {
             E: quantity('stress', system, 'positive', `Modulus of elasticity. ${defaultNote('materialE')}`).optional(),
             G: quantity('stress', system, 'positive', `Shear modulus (or give poissonRatio). ${defaultNote('materialG')}`).optional(),
             poissonRatio: factor('Poisson ratio; G = E / (2 (1 + poissonRatio))', 0, 0.5, 'the Poisson ratio of a metal is above 0 and at most 0.5 (steel 0.3, aluminium 0.33)', false).optional(),
-            yieldStrength: quantity('stress', system, 'positive', `Minimum yield strength. ${defaultNote('materialFy')}`).optional(),
+            yieldStrength: quantity('stress', system, 'positive', `Minimum yield strength (or give grade). ${defaultNote('materialFy')}`).optional(),
+            grade: z.enum(TUBE_STEEL_GRADES as [string, ...string[]]).meta({ description: `Steel grade of the tubes, which sets the minimum yield strength: ${TUBE_STEEL_GRADES.join(', ')} (give the grade or yieldStrength, not both)` }).optional(),
             density: quantity('density', system, 'positive', `Density. ${defaultNote('materialDensity')}`).optional(),
           })
           .optional(),
