@@ -168,7 +168,7 @@ function runCombination(solver: Solver, loads: readonly FactoredLoad[], opts: An
   let residual = 0;
   if (opts.secondOrder) {
     let uPrev = u1;
-    let N = axialForces(prep, first.U, ls);
+    let N = axialForces(prep, first.U);
     let Nused = N;
     let converged = false;
     while (iterations < opts.maxIterations) {
@@ -186,7 +186,7 @@ function runCombination(solver: Solver, loads: readonly FactoredLoad[], opts: An
       const scale = maxAbs(u);
       change = scale > 0 ? diff / scale : 0;
       Nused = N;
-      N = axialForces(prep, expand(prep, u), ls);
+      N = axialForces(prep, expand(prep, u));
       uPrev = u;
       if (change < opts.tolerance) {
         converged = true;

@@ -271,19 +271,22 @@ export function endForcesFromLocal(pe: PreparedElement, d: Float64Array, fef: Fl
   return f;
 }
 
-/** Mean axial force (tension +) of each element from its elastic end forces, (f_j,x - f_i,x) / 2. */
-export function axialForces(prep: PreparedModel, U: ArrayLike<number>, ls: LoadSet): Float64Array {
+/**
+ * The axial force (tension +) each element carries, for its geometric stiffness: the length-weighted
+ * mean of N(x) along the element, which is EA times its elongation over L, EA (d_j - d_i) / L. The
+ * element's loads need no term of their own: a bar's nodal displacements are exact, and the
+ * elongation is the integral of N / EA whatever the axial loads. (The mean of the two end forces,
+ * (f_j - f_i) / 2, counts a point load at an element end as half carried: a head load at the pole
+ * top would stiffen the top segment's P-delta with 0.5 P.)
+ */
+export function axialForces(prep: PreparedModel, U: ArrayLike<number>): Float64Array {
   const out = new Float64Array(prep.elements.length);
   for (let e = 0; e < out.length; e++) {
     const pe = prep.elements[e];
     const R = pe.geo.R;
     const di = axialEndDisplacement(R, U, pe.el.i * 6, pe.el.offsetI_m);
     const dj = axialEndDisplacement(R, U, pe.el.j * 6, pe.el.offsetJ_m);
-    const EA_L = (pe.el.E_Pa * pe.el.A_m2) / pe.geo.L;
-    const fef = ls.fixedEnd[e];
-    const fi = EA_L * (di - dj) + (fef ? fef[0] : 0);
-    const fj = EA_L * (dj - di) + (fef ? fef[6] : 0);
-    out[e] = (fj - fi) / 2;
+    out[e] = ((pe.el.E_Pa * pe.el.A_m2) / pe.geo.L) * (dj - di);
   }
   return out;
 }
