@@ -11,7 +11,11 @@
 //   each element's own moment imbalance in its displaced position. The consistent geometric
 //   stiffness built from the axial force only (element-matrices.ts) balances exactly the axial
 //   force acting through the element's transverse displacements (its end forces carry the moment
-//   N (v_j - v_i)), and nothing else. It leaves out first-order products of other forces with
+//   N (v_j - v_i)), and nothing else. N is the axial force the element carries (its length-weighted
+//   mean, frame-system.ts axialForces): were it short of that (the mean of the end forces counts a
+//   load at an element end as half carried), the missing P-delta moment would show here too, and
+//   it would be an error, not a term of the method (a head load at the top of a column:
+//   tests/analysis/p-delta-element-loads.test.ts). It leaves out first-order products of other forces with
 //   displacements: the shear acting through the axial shortening (a planar cantilever with tip
 //   loads P and H leaves exactly H P L / (E A), tests/analysis/statics-deformed.test.ts), the shear
 //   in one plane acting through the displacement in the other (a torque about the member: e.g.
