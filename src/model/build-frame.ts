@@ -37,7 +37,9 @@ export interface BuildFrameOptions {
  * Segments per member that keep the tip deflection of a tapered cantilever within 0.5 % of
  * the continuous taper for tapers up to a 4:1 diameter ratio (measured in
  * tests/model/segment-convergence.test.ts: worst case 0.36 % at 20 segments; 10 segments
- * give up to 1.3 % on a 4:1 arm and 0.64 % on a 2.4:1 arm).
+ * give up to 1.3 % on a 4:1 arm and 0.64 % on a 2.4:1 arm). Second order: the base moment's
+ * second-order increment and the tip movements within 0.2 % of 160 segments on the bundled
+ * examples (tests/model/segment-convergence-second-order.test.ts).
  */
 export const RECOMMENDED_SEGMENTS_PER_MEMBER = 20;
 
