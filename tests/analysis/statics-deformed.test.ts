@@ -73,6 +73,24 @@ describe('deformed-configuration statics of a beam-column (statics; Hooke; Timos
   });
 });
 
+describe('the same beam-column with the tip loads on the end of the top element, as the package places an attachment (statics; Hooke)', () => {
+  // A load at an element end is carried by that element in full; the residual is then the same
+  // -H P L / (E A) as with nodal loads, and nothing of the P-delta moment is missing from it.
+  it('moment residual equals -H P L / (E A) at 4 and 16 elements', () => {
+    for (const n of [4, 16]) {
+      const { model } = column(n);
+      const top = model.elements.length - 1;
+      const at = (direction: [number, number, number], value: number): AppliedLoad => ({
+        kind: 'point-force', element: top, axes: 'global', direction, value, a_m: L / n, origin: { source: 'test' },
+      });
+      const st = secondOrder(model, [at([1, 0, 0], H), at([0, 0, -1], P)]).statics;
+      const expected = (-H * P * L) / EA;
+      // 1e-6 as above: round-off of moment sums about 1e4 times the residual
+      expect(Math.abs(st.residualMoment_Nm[1] - expected) / Math.abs(expected), `${n} elements`).toBeLessThan(1e-6);
+    }
+  });
+});
+
 describe('3D pole and arm in second order: forces balance exactly, moments leave a small share (statics)', () => {
   it('weight on the arm tip and a lateral load across the arm', () => {
     const b = new FrameBuilder();
