@@ -14,8 +14,11 @@ import { analysisSummaryLines, movementWarningLines } from './analysis-summary.t
 import { runChecks } from './checks/run-checks.ts';
 import type { CheckResults } from './checks/check-types.ts';
 import { checkSummaryLines } from './checks/check-summary.ts';
-import { checkSections } from './report/sections/check-sections.ts';
+import { checkSections, CHECKS_TITLE } from './report/sections/check-sections.ts';
+import { summarySection } from './report/sections/summary-section.ts';
+import { RESULTS_TITLE } from './report/sections/results-section.ts';
 import { assertPrintable } from './printable-input.ts';
+import { issuedRegisterUpdate, type RegisterUpdate } from './output/issued-register.ts';
 
 export interface BuildOptions {
   readonly env?: Readonly<Record<string, string | undefined>>;
@@ -36,19 +39,24 @@ export interface PackageResult {
   /** Warnings about the results for the terminal (results outside the method). */
   readonly resultWarnings: readonly string[];
   readonly checksFail: boolean;
+  /** For an issued revision: the record of issued revisions to write beside the input. */
+  readonly issuedRegister: RegisterUpdate | null;
 }
 
 export async function buildPackage(file: string, opts: BuildOptions = {}): Promise<PackageResult> {
   const loaded = loadDesignFile(file, { SOURCE_DATE_EPOCH: opts.env?.SOURCE_DATE_EPOCH });
   assertPrintable(loaded);
+  // An issued revision rebuilt from a changed input is refused before any work.
+  const issuedRegister = issuedRegisterUpdate(loaded);
   const analysis = analyseDesign(loaded.design, { firstOrder: opts.firstOrder });
   const checks = runChecks(loaded.design, analysis);
-  const document = buildDocument(loaded, { sections: [...analysisSections(loaded, analysis), ...checkSections(loaded, analysis, checks)], secondOrder: analysis.options.secondOrder, checks });
+  const summaryPage = summarySection(loaded, analysis, checks, { checks: CHECKS_TITLE, results: RESULTS_TITLE });
+  const document = buildDocument(loaded, { sections: [...analysisSections(loaded, analysis), ...checkSections(loaded, analysis, checks)], secondOrder: analysis.options.secondOrder, checks, summary: summaryPage });
   const pdf = await renderPdf(document);
   const json = opts.json
     ? resultsJson({ loaded, toolVersion: toolVersion(), ...analysis, secondOrder: analysis.options.secondOrder, checks })
     : null;
   const summary = [...analysisSummaryLines(loaded.design, analysis), ...checkSummaryLines(loaded.design, checks)];
   const resultWarnings = movementWarningLines(loaded.design, analysis);
-  return { loaded, analysis, checks, document, pdf, json, summary, resultWarnings, checksFail: checks.fails };
+  return { loaded, analysis, checks, document, pdf, json, summary, resultWarnings, checksFail: checks.fails, issuedRegister };
 }

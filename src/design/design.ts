@@ -281,6 +281,18 @@ export interface Revision {
   readonly id: string;
   readonly date: string;
   readonly description: string;
+  /** Who made it; '' when not given. */
+  readonly by: string;
+  /** Set when the revision is issued for submittal by the engineer of record. */
+  readonly issued: IssuedMark | null;
+}
+
+/** The engineer of record's mark on an issued revision. */
+export interface IssuedMark {
+  readonly engineer: string;
+  readonly licence: string;
+  /** '' when not given. */
+  readonly jurisdiction: string;
 }
 
 export interface Project {

@@ -127,11 +127,21 @@ export function normalise(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?
 
 function buildProject(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?: string }, problems: Problem[]): Project {
   const p = input.project;
-  const revisions = (p.revisions ?? []).map((r) => ({ id: r.id, date: r.date, description: r.description }));
+  const revisions = (p.revisions ?? []).map((r) => ({
+    id: r.id,
+    date: r.date,
+    description: r.description,
+    by: r.by ?? '',
+    issued: r.issued ? { engineer: r.issued.engineer, licence: r.issued.licence, jurisdiction: r.issued.jurisdiction ?? '' } : null,
+  }));
   const seen = new Set<string>();
   revisions.forEach((r, i) => {
     if (seen.has(r.id)) problems.push(error(['project', 'revisions', i, 'id'], `duplicate revision id '${r.id}'`));
     seen.add(r.id);
+    // A package is the newest revision; an issued mark on an older one would describe another document.
+    if (r.issued && i !== revisions.length - 1) {
+      problems.push(error(['project', 'revisions', i, 'issued'], `revision '${r.id}' is not the newest revision: only the newest revision (the last listed) can be marked issued; an earlier issue is recorded by its own package`));
+    }
   });
   return {
     name: p.name,

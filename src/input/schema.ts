@@ -197,7 +197,17 @@ export function buildInputSchema(system: UnitSystem) {
         structureId: id('Structure id, printed on every page'),
         location: text('Location (road, crossing, station)').optional(),
         owner: text('Owner or client').optional(),
-        revisions: z.array(z.strictObject({ id: id('Revision id, e.g. A or 0'), date: isoDate('Revision date, yyyy-mm-dd'), description: text('What changed') })).max(MAX_REVISIONS, listLimit(MAX_REVISIONS, 'revisions', 'a package is issued a few times')).optional(),
+        revisions: z.array(z.strictObject({
+          id: id('Revision id, e.g. A or 0'),
+          date: isoDate('Revision date, yyyy-mm-dd'),
+          description: text('What changed'),
+          by: text('Who made the revision (initials or name), printed in the revision history').optional(),
+          issued: z.strictObject({
+            engineer: text('Engineer of record who issues this revision, as on the seal'),
+            licence: text('Licence or registration number of the engineer of record'),
+            jurisdiction: text('Where the licence is held (state, province or country)').optional(),
+          }).meta({ description: 'Marks the revision issued for submittal (only the newest revision can be): the package drops its DRAFT marks, fills the sign-off block and records the input hash of this revision beside the package; building the same issued revision again from a changed input is refused' }).optional(),
+        })).max(MAX_REVISIONS, listLimit(MAX_REVISIONS, 'revisions', 'a package is issued a few times')).optional(),
         preparedBy: text('Prepared by').optional(),
         checkedBy: text('Checked by').optional(),
         engineerOfRecord: text('Engineer of record').optional(),

@@ -3,6 +3,7 @@
 // a PDF by src/report/pdf/. The renderer computes no engineering; the builders draw nothing.
 import type { CalcStep } from '../calc/step.ts';
 import type { UnitSystem } from '../units/units.ts';
+import type { IssuedMark, Revision } from '../design/design.ts';
 
 export type Block =
   | { readonly kind: 'heading'; readonly text: string; readonly level: 2 | 3 }
@@ -19,9 +20,24 @@ export type Block =
       readonly widths?: readonly (number | '*' | 'auto')[];
       readonly note?: string;
     }
-  | { readonly kind: 'figure'; readonly title: string; readonly svg: string; readonly width_pt: number; readonly caption: string }
+  | {
+      readonly kind: 'figure';
+      readonly title: string;
+      readonly svg: string;
+      readonly width_pt: number;
+      readonly caption: string;
+      /** A paragraph printed to the left of the figure (the figure then sits at the right margin). */
+      readonly beside?: { readonly text: string; readonly emphasis?: boolean };
+    }
   | { readonly kind: 'code'; readonly title: string; readonly text: string }
-  | { readonly kind: 'signoff'; readonly rows: readonly { readonly role: string; readonly name: string }[]; readonly date: string }
+  | {
+      readonly kind: 'signoff';
+      /** date: the date written beside a name, '' for a blank to fill in by hand. */
+      readonly rows: readonly { readonly role: string; readonly name: string; readonly date: string }[];
+      readonly date: string;
+      /** An issued revision: the seal box asks for the seal, the block says the package is issued. */
+      readonly issued: boolean;
+    }
   | { readonly kind: 'pagebreak' };
 
 export interface DocSection {
@@ -31,6 +47,10 @@ export interface DocSection {
   readonly blocks: readonly Block[];
   /** Printed after the numbered sections and lettered ("Appendix A"). Added for the input echo. */
   readonly appendix?: boolean;
+  /** Front pages only: the letter their tables and figures are numbered by ("Table S.1"). */
+  readonly label?: string;
+  /** Front pages only: printed on from what precedes it (the cover) instead of on a new page. */
+  readonly continuous?: boolean;
 }
 
 export interface DocumentMeta {
@@ -41,7 +61,12 @@ export interface DocumentMeta {
   readonly owner: string;
   readonly revision: string;
   readonly revisionDate: string;
-  readonly status: string; // 'DRAFT FOR REVIEW'
+  /** 'DRAFT FOR REVIEW', or 'ISSUED FOR SUBMITTAL' for an issued revision. */
+  readonly status: string;
+  /** Every revision, oldest first, for the revision history. */
+  readonly revisions: readonly Revision[];
+  /** The engineer of record's mark when the newest revision is issued. */
+  readonly issued: IssuedMark | null;
   readonly date: string; // ISO date printed on the package
   readonly inputHash: string;
   readonly inputFile: string;
@@ -56,5 +81,7 @@ export interface DocumentModel {
   readonly meta: DocumentMeta;
   /** Blocks on the cover page below the title block (caution, sign-off). */
   readonly cover: readonly Block[];
+  /** Unnumbered pages between the cover and the contents, read first (revision history, summary). */
+  readonly front: readonly DocSection[];
   readonly sections: readonly DocSection[];
 }

@@ -83,7 +83,7 @@ export function makeDesign(over: Partial<Design> = {}): Design {
       structureId: 'TS-001',
       location: 'Harbor Loop at Quarry Road (fictional)',
       owner: 'Fictional County Roads',
-      revisions: [{ id: 'A', date: '2026-01-01', description: 'test' }],
+      revisions: [{ id: 'A', date: '2026-01-01', description: 'test', by: '', issued: null }],
       preparedBy: 'test',
       checkedBy: 'test',
       engineerOfRecord: 'test',

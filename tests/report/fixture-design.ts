@@ -80,7 +80,7 @@ export const FIXTURE_DESIGN: Design = {
     structureId: 'QM-CS-07',
     location: 'Quarry Mill Road, station 4+380, eastbound shoulder',
     owner: 'Larkspur Valley Transportation Authority',
-    revisions: [{ id: 'A', date: '2026-03-15', description: 'first issue for review' }],
+    revisions: [{ id: 'A', date: '2026-03-15', description: 'first issue for review', by: 'R. O.-H.', issued: null }],
     preparedBy: 'R. Okonkwo-Hale',
     checkedBy: 'T. Vasquez-Lind',
     engineerOfRecord: '',

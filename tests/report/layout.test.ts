@@ -20,6 +20,8 @@ const META: DocumentModel['meta'] = {
   toolVersion: '0.0.0',
   analysisOrder: 'P-delta',
   units: 'si',
+  revisions: [{ id: '0', date: '2026-01-02', description: 'layout test', by: '', issued: null }],
+  issued: null,
 };
 
 const longTable: Block = {
@@ -34,7 +36,7 @@ function filler(n: number): Block[] {
 }
 
 function model(blocks: Block[]): DocumentModel {
-  return { meta: META, cover: [], sections: [{ id: 's', title: 'Flow', blocks }] };
+  return { meta: META, cover: [], front: [], sections: [{ id: 's', title: 'Flow', blocks }] };
 }
 
 describe('page flow', () => {

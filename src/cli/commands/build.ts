@@ -48,7 +48,10 @@ export const buildCommand: Command = {
     try {
       mkdirSync(outDir, { recursive: true });
       // Both complete before either replaces an earlier file.
-      writeFilesAtomic([{ path: pdfPath, data: result.pdf }, ...(result.json !== null ? [{ path: jsonPath, data: result.json }] : [])]);
+      // The record of an issued revision goes with its package, all or nothing.
+      const register = result.issuedRegister?.text != null ? [{ path: result.issuedRegister.path, data: result.issuedRegister.text }] : [];
+      writeFilesAtomic([{ path: pdfPath, data: result.pdf }, ...(result.json !== null ? [{ path: jsonPath, data: result.json }] : []), ...register]);
+      if (register.length > 0) written.push(result.issuedRegister!.path);
     } catch (err) {
       const code = (err as NodeJS.ErrnoException).code;
       if (typeof code !== 'string') throw err;

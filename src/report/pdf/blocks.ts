@@ -11,14 +11,16 @@ import { FONT_MONO, FONT_SANS } from './fonts.ts';
 export interface SectionCounter {
   readonly label: string; // "2" or "A"
   readonly units: UnitSystem;
+  /** The id of the section's heading: its sub-headings are its children in the PDF outline. */
+  readonly outlineParent: string | null;
   sub: number;
   tables: number;
   figures: number;
   listings: number;
 }
 
-export function newCounter(label: string, units: UnitSystem): SectionCounter {
-  return { label, units, sub: 0, tables: 0, figures: 0, listings: 0 };
+export function newCounter(label: string, units: UnitSystem, outlineParent: string | null = null): SectionCounter {
+  return { label, units, outlineParent, sub: 0, tables: 0, figures: 0, listings: 0 };
 }
 
 /** A heading is kept with what follows it; content that may run past a page cannot be
@@ -72,6 +74,7 @@ function headingContent(text: string, level: 2 | 3, counter: SectionCounter): Co
     tocItem: true,
     tocMargin: [16, 0, 0, 0],
     tocStyle: { fontSize: 9 },
+    ...(counter.outlineParent !== null ? { outline: true, outlineParentId: counter.outlineParent } : {}),
   } as Content;
 }
 
@@ -94,7 +97,7 @@ export function blockContent(block: Block, counter: SectionCounter): Content {
     case 'code':
       return codeContent(block.title, block.text, counter);
     case 'signoff':
-      return signoffContent(block.rows, block.date);
+      return signoffContent(block.rows, block.date, block.issued);
     case 'pagebreak':
       return { text: '', pageBreak: 'after' };
   }
@@ -166,6 +169,23 @@ function tableContent(block: Extract<Block, { kind: 'table' }>, counter: Section
 
 function figureContent(block: Extract<Block, { kind: 'figure' }>, counter: SectionCounter): Content {
   counter.figures += 1;
+  if (block.beside) {
+    return {
+      unbreakable: true,
+      margin: [0, 2, 0, 8],
+      columnGap: 12,
+      columns: [
+        { width: '*', text: block.beside.text, style: 'paragraph', bold: block.beside.emphasis === true },
+        {
+          width: block.width_pt,
+          stack: [
+            { svg: block.svg, width: block.width_pt, font: FONT_SANS } as Content,
+            { text: [{ text: `Figure ${counter.label}.${counter.figures}  ${block.title}. `, bold: true }, block.caption], style: 'note', color: COLOR.text, margin: [0, 2, 0, 0] },
+          ],
+        },
+      ],
+    } as Content;
+  }
   return {
     unbreakable: true,
     margin: [0, 6, 0, 12],
@@ -211,16 +231,16 @@ function codeContent(title: string, text: string, counter: SectionCounter): Cont
   } as Content;
 }
 
-function signoffContent(rows: readonly { role: string; name: string }[], date: string): Content {
+function signoffContent(rows: readonly { role: string; name: string; date: string }[], date: string, issued: boolean): Content {
   const header: TableCell[] = ['Role', 'Name', 'Signature', 'Date'].map((h) => ({ text: h, style: 'tableHeader', fillColor: COLOR.fillHeader }));
   const body: TableCell[][] = rows.map((r) => [
     { text: r.role, bold: true, style: 'tableCell' },
     { text: r.name === '' ? ' ' : r.name, style: 'tableCell' },
     { text: ' ' },
-    { text: ' ' },
+    { text: r.date === '' ? ' ' : r.date, style: 'tableCell' },
   ]);
   const table: Content = {
-    table: { widths: [92, '*', 90, 58], heights: (row: number) => (row === 0 ? 12 : 26), body: [header, ...body] },
+    table: { widths: [92, '*', 90, 58], heights: (row: number) => (row === 0 ? 12 : 22), body: [header, ...body] },
     layout: {
       hLineWidth: () => 0.6,
       vLineWidth: () => 0.6,
@@ -230,14 +250,14 @@ function signoffContent(rows: readonly { role: string; name: string }[], date: s
       paddingBottom: () => 4,
     },
   } as Content;
-  const sealSize = 100;
+  const sealSize = 92;
   const seal: Content = {
     width: sealSize,
     stack: [
       {
         canvas: [{ type: 'rect', x: 0, y: 0, w: sealSize, h: sealSize, lineWidth: 0.6, lineColor: COLOR.rule, dash: { length: 3, space: 2 } }],
       },
-      { text: 'Seal of the engineer of record', style: 'small', alignment: 'center', margin: [0, 3, 0, 0] },
+      { text: issued ? 'Seal of the engineer of record (required: issued revision)' : 'Seal of the engineer of record', style: 'small', alignment: 'center', margin: [0, 3, 0, 0] },
     ],
   } as Content;
   return {
@@ -245,7 +265,7 @@ function signoffContent(rows: readonly { role: string; name: string }[], date: s
     margin: [0, 4, 0, 0],
     stack: [
       { text: 'Sign-off', style: 'h3', margin: [0, 0, 0, 4] },
-      { columns: [{ width: '*', stack: [table, { text: `Package date: ${date}`, style: 'small', margin: [0, 4, 0, 0] }] }, seal], columnGap: 14 },
+      { columns: [{ width: '*', stack: [table, { text: `Package date: ${date}`, style: 'small', margin: [0, 3, 0, 0] }] }, seal], columnGap: 14 },
     ],
   };
 }

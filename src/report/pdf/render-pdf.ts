@@ -23,12 +23,22 @@ export function documentDefinition(doc: DocumentModel): TDocumentDefinitions {
   const content: Content[] = [
     ...titleBlock(meta),
     ...doc.cover.map((b) => blockContent(b, coverCounter)),
-    { toc: { title: { text: 'Contents', style: 'h1' }, textStyle: { fontSize: 9.5 }, numberStyle: { fontSize: 9.5 } }, pageBreak: 'before' } as Content,
   ];
+  // Front pages: unnumbered, each on its own page, in the outline and the contents.
+  for (const section of doc.front) {
+    const counter = newCounter(section.label ?? section.id.charAt(0).toUpperCase(), meta.units, `section-${section.id}`);
+    const continuous = section.continuous === true;
+    const heading = { text: section.title, style: continuous ? 'h3' : 'h1', tocItem: true, tocStyle: { bold: true }, id: `section-${section.id}`, outline: true, ...(continuous ? { margin: [0, 8, 0, 3] } : { pageBreak: 'before' }) } as Content;
+    // A section that runs on from the cover moves to the next page whole rather than split there.
+    if (continuous) content.push({ stack: [heading, ...blocksContent(section.blocks, counter)], unbreakable: true } as Content);
+    else content.push(heading, ...blocksContent(section.blocks, counter));
+  }
+  content.push({ text: 'Contents', style: 'h1', pageBreak: 'before', id: 'contents', outline: true } as Content);
+  content.push({ toc: { textStyle: { fontSize: 9.5 }, numberStyle: { fontSize: 9.5 } } } as Content);
   for (const { section, label, name } of labelSections(doc.sections)) {
     const heading = section.appendix === true ? `${name}  ${section.title}` : `${label}  ${section.title}`;
-    content.push({ text: heading, style: 'h1', tocItem: true, tocStyle: { bold: true }, pageBreak: 'before', id: `section-${section.id}` } as Content);
-    content.push(...blocksContent(section.blocks, newCounter(label, meta.units)));
+    content.push({ text: heading, style: 'h1', tocItem: true, tocStyle: { bold: true }, pageBreak: 'before', id: `section-${section.id}`, outline: true } as Content);
+    content.push(...blocksContent(section.blocks, newCounter(label, meta.units, `section-${section.id}`)));
   }
   return {
     pageSize: pageSizeFor(meta.units),

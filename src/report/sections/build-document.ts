@@ -11,6 +11,7 @@ import { geometrySection } from './geometry-section.ts';
 import { inputEchoSection } from './input-echo-section.ts';
 import { loadsSection } from './loads-section.ts';
 import { scopeSection, SCOPE_TITLE } from './scope-section.ts';
+import { revisionSection } from './revision-section.ts';
 
 export interface ExtraSections {
   /** Sections from later stages, in print order; those marked `appendix` follow the input echo. */
@@ -19,6 +20,8 @@ export interface ExtraSections {
   readonly secondOrder?: boolean;
   /** The design checks, for the scope's list of what is checked; null: none were made. */
   readonly checks?: CheckResults | null;
+  /** The summary page (from the analysis and checks), printed after the revision history. */
+  readonly summary?: DocSection;
 }
 
 export function buildDocument(loaded: LoadedDesign, extra: ExtraSections = {}): DocumentModel {
@@ -35,5 +38,6 @@ export function buildDocument(loaded: LoadedDesign, extra: ExtraSections = {}): 
   // The scope lists every section, itself included, so it is built last and printed first.
   const placeholder: DocSection = { id: 'scope', title: SCOPE_TITLE, blocks: [] };
   const sections = [scopeSection(loaded, [placeholder, ...body], extra.checks ?? null), ...body];
-  return { meta: documentMeta(loaded, secondOrder), cover: coverBlocks(loaded), sections: cleanRoundOff(sections) };
+  const front = [revisionSection(loaded), ...(extra.summary ? [extra.summary] : [])];
+  return { meta: documentMeta(loaded, secondOrder), cover: coverBlocks(loaded), front: cleanRoundOff(front), sections: cleanRoundOff(sections) };
 }

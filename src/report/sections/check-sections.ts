@@ -10,10 +10,9 @@ import { display, fractionText, memberText, type Display } from './display.ts';
 import { largeMovements, SMALL_DISPLACEMENT_LIMIT } from '../../analysis/displacement-range.ts';
 import { RESULTS_TITLE } from './results-section.ts';
 import { templateBlocks } from './templates.ts';
+import { checkPlaceText, checkRatioText, STATUS_TEXT } from './check-text.ts';
 
 export const CHECKS_TITLE = 'Design checks';
-
-const STATUS_TEXT: Readonly<Record<CheckRecord['status'], string>> = { ok: 'pass', fail: 'FAIL', warn: 'warning' };
 
 export function checkSections(loaded: LoadedDesign, analysis: DesignAnalysis, checks: CheckResults): DocSection[] {
   const { design } = loaded;
@@ -71,12 +70,8 @@ function outsideMethodBlocks(analysis: DesignAnalysis): Block[] {
   ];
 }
 
-const ratioText = (r: CheckRecord): string => (Number.isFinite(r.ratio) ? r.ratio.toFixed(3) : 'not made');
-
-function placeText(r: CheckRecord, d: Display): string {
-  const who = memberText(r.member);
-  return r.s_m === null ? who : `${who}, ${d.q(r.s_m, 'length')}`;
-}
+const ratioText = checkRatioText;
+const placeText = checkPlaceText;
 
 function recordSentence(r: CheckRecord, d: Display): string {
   // A member record names its place; an anchorage label already says what it is about.

@@ -6,6 +6,7 @@ import type { DocumentMeta } from '../document.ts';
 import { KIND_LABEL } from './display.ts';
 
 export const PACKAGE_STATUS = 'DRAFT FOR REVIEW';
+export const ISSUED_STATUS = 'ISSUED FOR SUBMITTAL';
 
 export function documentMeta(loaded: LoadedDesign, secondOrder: boolean): DocumentMeta {
   const { project, kind, units } = loaded.design;
@@ -19,7 +20,9 @@ export function documentMeta(loaded: LoadedDesign, secondOrder: boolean): Docume
     owner: project.owner,
     revision: latest?.id ?? 'none given',
     revisionDate: latest?.date ?? 'none given',
-    status: PACKAGE_STATUS,
+    status: latest?.issued ? ISSUED_STATUS : PACKAGE_STATUS,
+    revisions: project.revisions,
+    issued: latest?.issued ?? null,
     date: project.date,
     inputHash: loaded.inputHash,
     // The file name only: the folder it was read from must not change the package bytes.
