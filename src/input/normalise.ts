@@ -138,10 +138,6 @@ function buildProject(input: DesignInput, env: { readonly SOURCE_DATE_EPOCH?: st
   revisions.forEach((r, i) => {
     if (seen.has(r.id)) problems.push(error(['project', 'revisions', i, 'id'], `duplicate revision id '${r.id}'`));
     seen.add(r.id);
-    // A package is the newest revision; an issued mark on an older one would describe another document.
-    if (r.issued && i !== revisions.length - 1) {
-      problems.push(error(['project', 'revisions', i, 'issued'], `revision '${r.id}' is not the newest revision: only the newest revision (the last listed) can be marked issued; an earlier issue is recorded by its own package`));
-    }
   });
   return {
     name: p.name,

@@ -206,7 +206,7 @@ export function buildInputSchema(system: UnitSystem) {
             engineer: text('Engineer of record who issues this revision, as on the seal'),
             licence: text('Licence or registration number of the engineer of record'),
             jurisdiction: text('Where the licence is held (state, province or country)').optional(),
-          }).meta({ description: 'Marks the revision issued for submittal (only the newest revision can be): the package drops its DRAFT marks, fills the sign-off block and records the input hash of this revision beside the package; building the same issued revision again from a changed input is refused' }).optional(),
+          }).meta({ description: 'Marks the revision issued for submittal. When the newest revision (the last listed) is issued, the package drops its DRAFT marks, fills the sign-off block and records the input hash of this revision beside the input file (<input name>.issued.json); building the same issued revision again from a changed input is refused. Earlier revisions keep their mark as history' }).optional(),
         })).max(MAX_REVISIONS, listLimit(MAX_REVISIONS, 'revisions', 'a package is issued a few times')).optional(),
         preparedBy: text('Prepared by').optional(),
         checkedBy: text('Checked by').optional(),

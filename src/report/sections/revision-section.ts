@@ -14,7 +14,7 @@ export function revisionSection(loaded: LoadedDesign): DocSection {
     r.date,
     r.description,
     r.by === '' ? '—' : r.by,
-    r.issued ? `issued by ${r.issued.engineer}` : r === newest ? 'this package (draft)' : 'earlier package',
+    r.issued ? `issued by ${r.issued.engineer}${r === newest ? ' (this package)' : ''}` : r === newest ? 'this package (draft)' : 'earlier draft',
   ]);
   return {
     id: REVISIONS_ID,
