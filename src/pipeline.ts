@@ -51,7 +51,7 @@ export async function buildPackage(file: string, opts: BuildOptions = {}): Promi
   const analysis = analyseDesign(loaded.design, { firstOrder: opts.firstOrder });
   const checks = runChecks(loaded.design, analysis);
   const summaryPage = summarySection(loaded, analysis, checks, { checks: CHECKS_TITLE, results: RESULTS_TITLE });
-  const document = buildDocument(loaded, { sections: [...analysisSections(loaded, analysis), ...checkSections(loaded, analysis, checks)], secondOrder: analysis.options.secondOrder, checks, summary: summaryPage });
+  const document = buildDocument(loaded, { sections: analysisSections(loaded, analysis, checkSections(loaded, analysis, checks)), secondOrder: analysis.options.secondOrder, checks, summary: summaryPage });
   const pdf = await renderPdf(document);
   const json = opts.json
     ? resultsJson({ loaded, toolVersion: toolVersion(), ...analysis, secondOrder: analysis.options.secondOrder, checks })

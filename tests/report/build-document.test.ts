@@ -17,15 +17,15 @@ function section(id: string, sections: readonly DocSection[]): DocSection {
 }
 
 describe('buildDocument', () => {
-  it('orders the sections: scope, criteria, geometry, loads, later sections, then the input echo appendix', () => {
+  it('orders the sections: scope, criteria, geometry, loads, later sections, the appendices given, then the input echo', () => {
     const appendixExtra: DocSection = { id: 'statics', title: 'Statics check', blocks: [], appendix: true };
     const doc = buildDocument(FIXTURE_LOADED, { sections: [demoStepsSection(), appendixExtra] });
-    expect(doc.sections.map((s) => s.id)).toEqual(['scope', 'criteria', 'geometry', 'loads', 'demo-steps', 'input-echo', 'statics']);
+    expect(doc.sections.map((s) => s.id)).toEqual(['scope', 'criteria', 'geometry', 'loads', 'demo-steps', 'statics', 'input-echo']);
     expect(doc.sections.map((s) => s.appendix === true)).toEqual([false, false, false, false, false, true, true]);
     const scopeText = section('scope', doc.sections).blocks.flatMap((b) => (b.kind === 'bullets' ? b.items : []));
     expect(scopeText).toContain('Section 5: Demonstration steps');
-    expect(scopeText).toContain('Appendix A: Input echo');
-    expect(scopeText).toContain('Appendix B: Statics check');
+    expect(scopeText).toContain('Appendix A: Statics check');
+    expect(scopeText).toContain('Appendix B: Input echo');
   });
 
   it('fills the meta from the project, the last revision and the input', () => {

@@ -1,5 +1,7 @@
-// The analysis part of the package, in print order: what a checker needs to follow the
-// analysis by hand. Each section has its own builder file; this one only orders them.
+// The analysis part of the package, in print order: the model and the loads, the results, the
+// design checks (handed in by the caller), the hand check, then the long tables as appendices, so
+// the checker meets the design before the derivation. Each section has its own builder file; this
+// one only orders them.
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { LoadedDesign } from '../../design/design.ts';
 import type { DocSection } from '../document.ts';
@@ -7,18 +9,22 @@ import { combinationsSection } from './combinations-section.ts';
 import { diagramsSection } from './diagrams-section.ts';
 import { elevationPlanSection } from './elevation-plan-section.ts';
 import { handCheckSection } from './hand-check-section.ts';
-import { loadCasesSection } from './load-cases-section.ts';
-import { resultsSection } from './results-section.ts';
+import { loadCasesSections } from './load-cases-section.ts';
+import { resultsSection, staticsTablesSection } from './results-section.ts';
 import { structuralModelSection } from './structural-model-section.ts';
 
-export function analysisSections(loaded: LoadedDesign, analysis: DesignAnalysis): DocSection[] {
+export function analysisSections(loaded: LoadedDesign, analysis: DesignAnalysis, checkSections: readonly DocSection[] = []): DocSection[] {
+  const loads = loadCasesSections(loaded, analysis);
   return [
     structuralModelSection(loaded, analysis),
     elevationPlanSection(loaded, analysis),
-    loadCasesSection(loaded, analysis),
+    loads.main,
     combinationsSection(loaded, analysis),
     resultsSection(loaded, analysis),
-    handCheckSection(loaded, analysis),
     diagramsSection(loaded, analysis),
+    ...checkSections,
+    handCheckSection(loaded, analysis),
+    loads.steps,
+    staticsTablesSection(loaded, analysis),
   ];
 }

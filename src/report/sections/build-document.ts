@@ -14,7 +14,7 @@ import { scopeSection, SCOPE_TITLE } from './scope-section.ts';
 import { revisionSection } from './revision-section.ts';
 
 export interface ExtraSections {
-  /** Sections from later stages, in print order; those marked `appendix` follow the input echo. */
+  /** Sections from later stages, in print order; those marked `appendix` follow them, before the input echo. */
   readonly sections?: readonly DocSection[];
   /** Whether the analysis of this package is second order (P-delta); default: what the input asks. */
   readonly secondOrder?: boolean;
@@ -27,13 +27,20 @@ export interface ExtraSections {
 export function buildDocument(loaded: LoadedDesign, extra: ExtraSections = {}): DocumentModel {
   const added = extra.sections ?? [];
   const secondOrder = extra.secondOrder ?? loaded.design.analysis.secondOrder;
+  // Geometry first (the input's, then the model's drawings), then the loads as entered beside the
+  // loads as applied: the loads-as-entered section goes just before the analysis' loads section.
+  const main = added.filter((s) => s.appendix !== true);
+  const loadsAt = main.findIndex((s) => s.id === 'load-cases');
+  const at = loadsAt < 0 ? 0 : loadsAt;
   const body: DocSection[] = [
     criteriaSection(loaded, secondOrder),
     geometrySection(loaded),
+    ...main.slice(0, at),
     loadsSection(loaded),
-    ...added.filter((s) => s.appendix !== true),
-    inputEchoSection(loaded),
+    ...main.slice(at),
+    // The appendices in the order given, the input echo last.
     ...added.filter((s) => s.appendix === true),
+    inputEchoSection(loaded),
   ];
   // The scope lists every section, itself included, so it is built last and printed first.
   const placeholder: DocSection = { id: 'scope', title: SCOPE_TITLE, blocks: [] };

@@ -47,10 +47,15 @@ const FATIGUE_RULE_LABEL: Readonly<Record<keyof typeof FATIGUE_RULES, string>> =
 /** A step's form: steps of one form differ only in their values. */
 const formOf = (s: CalcStep): string => `${s.formula}\u0000${s.source}`;
 
-export function loadCasesSection(loaded: LoadedDesign, analysis: DesignAnalysis): DocSection {
+export const LOAD_STEPS_TITLE = 'Load calculation steps, case by case';
+
+/** The loads section (rules, resultants) and its appendix with every calculation step by load case:
+ * the checker meets the loads first and finds each derivation in the appendix. */
+export function loadCasesSections(loaded: LoadedDesign, analysis: DesignAnalysis): { main: DocSection; steps: DocSection } {
   const { design } = loaded;
   const d = display(design.units);
   const blocks: Block[] = [...templateBlocks('load-cases', {}).blocks];
+  const stepBlocks: Block[] = [...templateBlocks('load-steps', {}).blocks];
   blocks.push({
     kind: 'table',
     title: 'Rules by which the loads are found',
@@ -67,7 +72,7 @@ export function loadCasesSection(loaded: LoadedDesign, analysis: DesignAnalysis)
   // The sources the steps cite, listed once and referred to by number in the tables.
   const sources = [...new Set(analysis.cases.flatMap((lc) => lc.steps.map((st) => st.source)))];
   const sourceRef = (src: string) => `[${sources.indexOf(src) + 1}]`;
-  blocks.push({
+  stepBlocks.push({
     kind: 'table',
     title: 'Sources cited by the load calculation steps',
     header: ['Ref.', 'Source'],
@@ -78,26 +83,26 @@ export function loadCasesSection(loaded: LoadedDesign, analysis: DesignAnalysis)
   // its steps, in order, as a table with their values.
   const worked = new Set<string>();
   for (const lc of analysis.cases) {
-    blocks.push({ kind: 'heading', level: 2, text: `Load case ${lc.id}` });
-    blocks.push({ kind: 'paragraph', text: lc.description });
+    stepBlocks.push({ kind: 'heading', level: 2, text: `Load case ${lc.id}` });
+    stepBlocks.push({ kind: 'paragraph', text: lc.description });
     const fresh: CalcStep[] = [];
     for (const st of lc.steps) {
       if (worked.has(formOf(st))) continue;
       worked.add(formOf(st));
       fresh.push(st);
     }
-    for (const st of fresh) blocks.push({ kind: 'step', step: st });
+    for (const st of fresh) stepBlocks.push({ kind: 'step', step: st });
     if (fresh.length < lc.steps.length) {
-      blocks.push(
+      stepBlocks.push(
         stepsTable(`Calculation steps of load case ${lc.id}`, lc.steps, design.units, {
           sourceRef,
-          note: fresh.length > 0 ? 'The steps worked in full above are repeated here in order with the others of this case. Sources: the numbered list at the start of the section.' : 'Each form of step is worked in full where it first occurs in this section. Sources: the numbered list at the start of the section.',
+          note: fresh.length > 0 ? 'The steps worked in full above are repeated here in order with the others of this case. Sources: the numbered list at the start of this appendix.' : 'Each form of step is worked in full where it first occurs in this appendix. Sources: the numbered list at its start.',
         }),
       );
     }
   }
   blocks.push({ kind: 'heading', level: 2, text: 'Resultants of the load cases' });
-  blocks.push({ kind: 'paragraph', text: 'The sum of the loads of each case, unfactored: a check on the steps above, and the loads the reactions of each combination must balance.' });
+  blocks.push({ kind: 'paragraph', text: `The sum of the loads of each case, unfactored: a check on the calculation steps (appendix "${LOAD_STEPS_TITLE}"), and the loads the reactions of each combination must balance.` });
   blocks.push({
     kind: 'table',
     title: 'Sum of the loads of each case (unfactored)',
@@ -109,5 +114,8 @@ export function loadCasesSection(loaded: LoadedDesign, analysis: DesignAnalysis)
     }),
     note: 'Forces along the global axes; moments about the global axes through the centre of the pole base (Z = 0), on the undeformed structure. Summed from the loads as applied to the frame model.',
   });
-  return { id: 'load-cases', title: LOAD_CASES_TITLE, blocks };
+  return {
+    main: { id: 'load-cases', title: LOAD_CASES_TITLE, blocks },
+    steps: { id: 'load-steps', title: LOAD_STEPS_TITLE, blocks: stepBlocks, appendix: true },
+  };
 }

@@ -172,37 +172,7 @@ function staticsBlocks(analysis: DesignAnalysis, d: Display): Block[] {
   const blocks: Block[] = [
     { kind: 'heading', level: 2, text: 'Statics check' },
     ...templateBlocks('statics-check', { configurationText }).blocks,
-    {
-      kind: 'table',
-      title: 'Statics check: forces',
-      header: ['Combination', 'Applied ΣFx, ΣFy, ΣFz', 'Reactions ΣFx, ΣFy, ΣFz', '|Residual|', 'Relative'],
-      widths: [110, '*', '*', '*', 44],
-      rows: rows.map((r) => [
-        r.combination,
-        componentLines(vecText(r.statics.appliedForce_N, 'force', d)),
-        componentLines(vecText(r.statics.reactionForce_N, 'force', d)),
-        d.q(Math.hypot(...r.statics.residualForce_N), 'force'),
-        r.statics.relativeForceResidual.toExponential(1),
-      ]),
-      note: `Configuration of the check: ${deformed ? 'deformed' : 'undeformed'}. Relative: |residual force| / Σ|applied forces| (dimensionless).`,
-    },
-    {
-      kind: 'table',
-      title: 'Statics check: moments about the origin',
-      header: ['Combination', 'Applied ΣMx, ΣMy, ΣMz', 'Reactions ΣMx, ΣMy, ΣMz', '|Residual|', 'Relative', ...(deformed ? ['Share'] : [])],
-      widths: [110, '*', '*', '*', 44, ...(deformed ? [52] : [])],
-      rows: rows.map((r) => [
-        r.combination,
-        componentLines(vecText(r.statics.appliedMoment_Nm, 'moment', d)),
-        componentLines(vecText(r.statics.reactionMoment_Nm, 'moment', d)),
-        d.q(Math.hypot(...r.statics.residualMoment_Nm), 'moment'),
-        r.statics.relativeMomentResidual.toExponential(1),
-        ...(deformed ? [share(r.statics.momentResidualShare)] : []),
-      ]),
-      note:
-        `Configuration of the check: ${deformed ? 'deformed' : 'undeformed'}. Relative: as defined above (dimensionless).` +
-        (deformed ? ' Share: |residual moment| / (Σ|applied forces| × largest node displacement), the part of the moment the displacements add that the method leaves unbalanced.' : ''),
-    },
+    { kind: 'paragraph', text: `The sums and residuals of every combination are tabled in the appendix "${STATICS_TABLES_TITLE}".` },
   ];
   const worstBy = (key: (r: CombinationResult) => number) => rows.reduce((a, b) => (key(b) > key(a) ? b : a));
   const wf = worstBy((r) => r.statics.relativeForceResidual);
@@ -370,3 +340,48 @@ export function resultsSection(loaded: LoadedDesign, analysis: DesignAnalysis): 
   };
 }
 
+
+export const STATICS_TABLES_TITLE = 'Statics check by combination';
+
+/** The appendix of the statics check: the sums of applied loads and reactions of every combination. */
+export function staticsTablesSection(loaded: LoadedDesign, analysis: DesignAnalysis): DocSection {
+  const d = display(loaded.design.units);
+  const deformed = analysis.options.secondOrder;
+  const rows = analysis.combinations.map((c) => resultOf(analysis, c));
+  const share = (v: number | null) => (v === null ? '–' : `${formatNumber(v * 100, 3)} %`);
+  const blocks: Block[] = [
+    { kind: 'paragraph', text: `The statics check of section "${RESULTS_TITLE}", combination by combination: forces, then moments about the origin.` },
+    {
+      kind: 'table',
+      title: 'Statics check: forces',
+      header: ['Combination', 'Applied ΣFx, ΣFy, ΣFz', 'Reactions ΣFx, ΣFy, ΣFz', '|Residual|', 'Relative'],
+      widths: [110, '*', '*', '*', 44],
+      rows: rows.map((r) => [
+        r.combination,
+        componentLines(vecText(r.statics.appliedForce_N, 'force', d)),
+        componentLines(vecText(r.statics.reactionForce_N, 'force', d)),
+        d.q(Math.hypot(...r.statics.residualForce_N), 'force'),
+        r.statics.relativeForceResidual.toExponential(1),
+      ]),
+      note: `Configuration of the check: ${deformed ? 'deformed' : 'undeformed'}. Relative: |residual force| / Σ|applied forces| (dimensionless).`,
+    },
+    {
+      kind: 'table',
+      title: 'Statics check: moments about the origin',
+      header: ['Combination', 'Applied ΣMx, ΣMy, ΣMz', 'Reactions ΣMx, ΣMy, ΣMz', '|Residual|', 'Relative', ...(deformed ? ['Share'] : [])],
+      widths: [110, '*', '*', '*', 44, ...(deformed ? [52] : [])],
+      rows: rows.map((r) => [
+        r.combination,
+        componentLines(vecText(r.statics.appliedMoment_Nm, 'moment', d)),
+        componentLines(vecText(r.statics.reactionMoment_Nm, 'moment', d)),
+        d.q(Math.hypot(...r.statics.residualMoment_Nm), 'moment'),
+        r.statics.relativeMomentResidual.toExponential(1),
+        ...(deformed ? [share(r.statics.momentResidualShare)] : []),
+      ]),
+      note:
+        `Configuration of the check: ${deformed ? 'deformed' : 'undeformed'}. Relative: as defined above (dimensionless).` +
+        (deformed ? ' Share: |residual moment| / (Σ|applied forces| × largest node displacement), the part of the moment the displacements add that the method leaves unbalanced.' : ''),
+    },
+  ];
+  return { id: 'statics-tables', title: STATICS_TABLES_TITLE, blocks, appendix: true };
+}
