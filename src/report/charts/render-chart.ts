@@ -29,6 +29,9 @@ interface VegaRuntime {
   resetSVGDefIds?: () => void;
 }
 
+/** vega-lite and vega report through a logger; a chart must not print on the terminal. */
+const SILENT_LOGGER = { level: () => SILENT_LOGGER, error: () => SILENT_LOGGER, warn: () => SILENT_LOGGER, info: () => SILENT_LOGGER, debug: () => SILENT_LOGGER };
+
 let measuring = false;
 /** vega measures text through a replaceable function (missing from its typings): ours, once. */
 function useOurTextMetrics(): void {
@@ -52,8 +55,8 @@ function withConfig(spec: TopLevelSpec, size: ChartSize): TopLevelSpec {
 /** Renders a vega-lite specification (data inline) to an SVG document string. */
 export async function renderChartSvg(spec: TopLevelSpec, size: ChartSize): Promise<string> {
   useOurTextMetrics();
-  const compiled = compile(withConfig(spec, size)).spec;
-  const view = new vega.View(vega.parse(compiled), { renderer: 'none', locale: CHART_LOCALE } as unknown as ConstructorParameters<typeof vega.View>[1]);
+  const compiled = compile(withConfig(spec, size), { logger: SILENT_LOGGER as never }).spec;
+  const view = new vega.View(vega.parse(compiled), { renderer: 'none', locale: CHART_LOCALE, logLevel: vega.None } as unknown as ConstructorParameters<typeof vega.View>[1]);
   try {
     (vega as unknown as VegaRuntime).resetSVGDefIds?.();
     const svg = await view.toSVG();
