@@ -36,6 +36,8 @@ export interface BuildOutcome {
   readonly written: readonly string[];
   /** Why it failed to build; null when the package was written. */
   readonly message: string | null;
+  /** The date printed on its package; null when none was built. */
+  readonly packageDate: string | null;
   /** Warnings of the input and of the results, for the terminal. */
   readonly warnings: readonly string[];
 }
@@ -56,7 +58,7 @@ function hashOf(file: string): string | null {
 export async function buildOneInput(task: BuildTask): Promise<BuildOutcome> {
   const names = outputNames(task.file, task.json);
   const paths = names.map((n) => join(task.outDir, n));
-  const base = { display: task.display, inputHash: hashOf(task.file), structureId: null, governingRatio: null, governingCheck: null, written: [], warnings: [] };
+  const base = { display: task.display, inputHash: hashOf(task.file), structureId: null, governingRatio: null, governingCheck: null, written: [], warnings: [], packageDate: null };
   try {
     checkOutputsWritable(task.outDir, paths);
     const result = await buildPackage(task.file, { env: task.env, firstOrder: task.firstOrder, json: task.json });
@@ -78,13 +80,16 @@ export async function buildOneInput(task: BuildTask): Promise<BuildOutcome> {
       governingCheck: m.governing.title,
       inputHash: result.loaded.inputHash,
       written: names,
+      packageDate: result.loaded.design.project.date,
       message: null,
       warnings: [...result.loaded.warnings.map(formatDiagnostic), ...result.resultWarnings],
     };
   } catch (err) {
-    if (err instanceof InputError) return { ...base, status: 'bad input', exitCode: EXIT.badInput, message: err.diagnostics.filter((d) => d.severity === 'error').map(formatDiagnostic).join('\n') };
-    if (err instanceof UnstableStructureError) return { ...base, status: 'unstable', exitCode: EXIT.unstable, message: err.message };
-    if (err instanceof PolebookError) return { ...base, status: err.exitCode === EXIT.badInput ? 'bad input' : 'internal error', exitCode: err.exitCode, message: err.message };
+    // Messages name the input as the user gave it, so the index is the same on every machine.
+    const local = (text: string) => text.split(task.file).join(task.display);
+    if (err instanceof InputError) return { ...base, status: 'bad input', exitCode: EXIT.badInput, message: local(err.diagnostics.filter((d) => d.severity === 'error').map(formatDiagnostic).join('\n')) };
+    if (err instanceof UnstableStructureError) return { ...base, status: 'unstable', exitCode: EXIT.unstable, message: local(err.message) };
+    if (err instanceof PolebookError) return { ...base, status: err.exitCode === EXIT.badInput ? 'bad input' : 'internal error', exitCode: err.exitCode, message: local(err.message) };
     return { ...base, status: 'internal error', exitCode: EXIT.internal, message: err instanceof Error ? (err.stack ?? err.message) : String(err) };
   }
 }

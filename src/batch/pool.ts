@@ -11,7 +11,7 @@ export interface PoolOptions {
   /** Threads to use; 1 runs every task in this thread. */
   readonly workers: number;
   /** Called as each task ends (in the order they end), for progress. */
-  readonly onDone?: (index: number, doneCount: number) => void;
+  readonly onDone?: (index: number, doneCount: number, result: unknown) => void;
 }
 
 /** The compiled worker script beside this module; null under the TypeScript sources (tests), where
@@ -39,7 +39,7 @@ export async function runPool<K extends TaskKind>(kind: K, tasks: readonly TaskO
   if (threads <= 1) {
     for (const [k, task] of tasks.entries()) {
       results[k] = await runTask(kind, task);
-      opts.onDone?.(k, ++done);
+      opts.onDone?.(k, ++done, results[k]);
     }
     return results;
   }
@@ -56,7 +56,7 @@ export async function runPool<K extends TaskKind>(kind: K, tasks: readonly TaskO
               w.once('message', (msg: { ok: boolean; result?: ResultOf<K>; error?: string }) => {
                 if (!msg.ok) return reject(new Error(`worker failed on task ${k + 1}: ${msg.error}`));
                 results[k] = msg.result!;
-                opts.onDone?.(k, ++done);
+                opts.onDone?.(k, ++done, results[k]);
                 give();
               });
               w.postMessage({ kind, task: tasks[k] });

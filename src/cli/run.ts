@@ -8,6 +8,7 @@ import { checkCommand } from './commands/check.ts';
 import { schemaCommand } from './commands/schema.ts';
 import { newCommand } from './commands/new.ts';
 import { compareCommand } from './commands/compare.ts';
+import { indexCommand } from './commands/index-command.ts';
 import { toolVersion } from '../version.ts';
 
 export interface Command {
@@ -17,7 +18,7 @@ export interface Command {
   readonly run: (argv: readonly string[], io: CliIO) => Promise<number>;
 }
 
-const COMMANDS: readonly Command[] = [buildCommand, compareCommand, checkCommand, schemaCommand, newCommand];
+const COMMANDS: readonly Command[] = [buildCommand, compareCommand, indexCommand, checkCommand, schemaCommand, newCommand];
 
 function mainHelp(): string {
   const width = Math.max(...COMMANDS.map((c) => c.name.length));
