@@ -29,10 +29,10 @@ export interface VarySpec {
   readonly origin: VaryOrigin;
 }
 
-/** A bad --vary option: the option printed with a caret under the place, then what is wrong. Exit 2. */
+/** A bad --vary option: what is wrong, then the option with a caret under the place. Exit 2. */
 export class VaryOptionError extends PolebookError {
   constructor(option: string, col: number, message: string) {
-    super(`--vary ${option}\n${' '.repeat('--vary '.length + col)}^\n${message}`, EXIT.badInput);
+    super(`${message}\n  --vary ${option}\n  ${' '.repeat('--vary '.length + col)}^`, EXIT.badInput);
   }
 }
 
