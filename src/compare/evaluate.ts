@@ -24,6 +24,8 @@ export interface EvaluateResult {
   readonly inputHash: string;
   /** Why it is unstable or refused; null otherwise. */
   readonly message: string | null;
+  /** Refused: the errors by key path, to tell a bad varied value from a problem it causes elsewhere. */
+  readonly problems: readonly { readonly path: string; readonly message: string }[];
   readonly metrics: AlternativeMetrics | null;
   readonly pdf: Uint8Array | null;
   readonly json: string | null;
@@ -35,20 +37,23 @@ export async function evaluateAlternative(task: EvaluateTask): Promise<EvaluateR
   try {
     loaded = loadTextForBuild(task.text, task.file, opts);
   } catch (err) {
-    if (err instanceof InputError) return refused(task, err.diagnostics.filter((d) => d.severity === 'error').map(formatDiagnostic).join('; '));
+    if (err instanceof InputError) {
+      const errors = err.diagnostics.filter((d) => d.severity === 'error');
+      return { ...refused(task, errors.map(formatDiagnostic).join('; ')), problems: errors.map((d) => ({ path: d.path, message: d.message })) };
+    }
     throw err;
   }
   try {
     const checked = analyseAndCheck(loaded, opts);
     const metrics = alternativeMetrics(loaded, checked);
     const pkg = task.package ? await packageOf(loaded, opts, checked) : null;
-    return { status: checked.checks.fails ? 'fails' : 'passes', inputHash: loaded.inputHash, message: null, metrics, pdf: pkg ? pkg.pdf : null, json: pkg?.json ?? null };
+    return { status: checked.checks.fails ? 'fails' : 'passes', inputHash: loaded.inputHash, message: null, problems: [], metrics, pdf: pkg ? pkg.pdf : null, json: pkg?.json ?? null };
   } catch (err) {
-    if (err instanceof UnstableStructureError) return { status: 'unstable', inputHash: loaded.inputHash, message: err.message, metrics: null, pdf: null, json: null };
+    if (err instanceof UnstableStructureError) return { status: 'unstable', inputHash: loaded.inputHash, message: err.message, problems: [], metrics: null, pdf: null, json: null };
     throw err;
   }
 }
 
 function refused(task: EvaluateTask, message: string): EvaluateResult {
-  return { status: 'refused', inputHash: inputHash(Buffer.from(task.text, 'utf8')), message, metrics: null, pdf: null, json: null };
+  return { status: 'refused', inputHash: inputHash(Buffer.from(task.text, 'utf8')), message, problems: [], metrics: null, pdf: null, json: null };
 }

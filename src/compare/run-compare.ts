@@ -1,12 +1,13 @@
 // `polebook compare`: the input and what to vary, to one row per alternative. Nothing is
-// written here (see src/cli/commands/compare.ts); a bad path or value stops the run before any
-// analysis with a positioned error (exit 2).
+// written here (see src/cli/commands/compare.ts). A bad path stops the run before any analysis,
+// a bad value (refused at its own key when the alternative's input is read) after the run; both
+// with a positioned error, exit 2, and nothing written.
 import { basename, extname } from 'node:path';
 import { LineCounter, parseDocument } from 'yaml';
 import type { LoadedDesign } from '../design/design.ts';
-import { EXIT, InputError, PolebookError } from '../errors.ts';
+import { EXIT, PolebookError } from '../errors.ts';
 import { formatPath } from '../input/problem.ts';
-import { loadForBuild, loadTextForBuild, type BuildOptions } from '../pipeline.ts';
+import { loadForBuild, type BuildOptions } from '../pipeline.ts';
 import { runPool, workersFor } from '../batch/pool.ts';
 import { alternativeLabel, alternativesOf, gridSize, MAX_ALTERNATIVES, type Alternative } from './alternatives.ts';
 import type { EvaluateResult } from './evaluate.ts';
@@ -68,31 +69,21 @@ export function prepareComparison(req: Pick<CompareRequest, 'input' | 'vary' | '
   const n = gridSize(specs);
   if (n > MAX_ALTERNATIVES) throw new PolebookError(`the varied values make ${n} alternatives (${specs.map((s) => s.values.length).join(' × ')}), more than the ${MAX_ALTERNATIVES} one comparison takes (a limit of ours); vary fewer values`, EXIT.badInput);
   const alternatives = alternativesOf(doc, specs);
-  refuseBadValues(base, specs, alternatives, opts);
   return { base, specs, alternatives, source: req.vary.length > 0 ? 'options' : 'compare block' };
 }
 
 /** A varied value the input stage refuses at its own key (a wrong unit, out of range) is a bad
- * value: said at the value, exit 2. Problems elsewhere that a value causes (a panel beyond a
- * shortened arm) are outcomes of that alternative's row. */
-function refuseBadValues(base: LoadedDesign, specs: readonly VarySpec[], alternatives: readonly Alternative[], opts: BuildOptions): void {
-  const reported = new Set<string>();
-  for (const alt of alternatives) {
-    try {
-      loadTextForBuild(alt.text, alternativeFileName(base.file, alt.index, alternatives.length), opts);
-    } catch (err) {
-      if (!(err instanceof InputError)) throw err;
-      for (const d of err.diagnostics) {
-        if (d.severity !== 'error') continue;
-        const hits = (s: VarySpec) => s.paths.some((p) => d.path === formatPath(p.path) || d.path.startsWith(`${formatPath(p.path)}.`));
-        const k = specs.findIndex(hits);
-        if (k < 0) continue;
-        const v = alt.values[k]!;
-        const key = `${k} ${v.label}`;
-        if (reported.has(key)) continue;
-        reported.add(key);
-        throw varyProblem(specs[k]!, { value: specs[k]!.values.indexOf(v), col: v.col }, `${specs[k]!.text} = ${v.label}: ${d.path}: ${d.message}`, d.path);
-      }
+ * value: said at the value, exit 2, nothing written. Problems elsewhere that a value causes (a
+ * panel beyond a shortened arm) are outcomes of that alternative's row. Read from the refused
+ * alternatives after the run, so no input is loaded twice. */
+function refuseBadValues(specs: readonly VarySpec[], alternatives: readonly Alternative[], results: readonly EvaluateResult[]): void {
+  for (const [n, alt] of alternatives.entries()) {
+    for (const d of results[n]!.problems) {
+      const hits = (s: VarySpec) => s.paths.some((p) => d.path === formatPath(p.path) || d.path.startsWith(`${formatPath(p.path)}.`));
+      const k = specs.findIndex(hits);
+      if (k < 0) continue;
+      const v = alt.values[k]!;
+      throw varyProblem(specs[k]!, { value: specs[k]!.values.indexOf(v), col: v.col }, `${specs[k]!.text} = ${v.label}: ${d.path}: ${d.message}`, d.path);
     }
   }
 }
@@ -105,6 +96,7 @@ export async function runComparison(req: CompareRequest): Promise<Comparison> {
     workers: workersFor(tasks.length, req.workers),
     onDone: (k, done) => req.onProgress?.(done, tasks.length, k + 1),
   });
+  refuseBadValues(specs, alternatives, results);
   const rows: CompareRow[] = alternatives.map((a, k) => ({ index: a.index, values: a.values, label: alternativeLabel(specs, a.values), file: files[k]!, text: a.text, result: results[k]! }));
   return { base, specs, rows, picks: picksOf(rows, specs, base.design.arms.map((a) => a.id)), source, secondOrder: base.design.analysis.secondOrder && !req.firstOrder };
 }

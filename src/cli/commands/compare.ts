@@ -37,7 +37,7 @@ Options:
   --quiet         no progress on stderr
   --help          show this help
 
-A bad path or value is reported at its place with exit code 2, before any analysis. An
+A bad path or value is reported at its place with exit code 2, and nothing is written. An
 alternative that is unstable or whose input is refused (e.g. a panel beyond a shortened arm)
 is reported in its row. Exit code: 0 when at least one alternative passes every check, 1 when
 none does, 2 bad input.
