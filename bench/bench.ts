@@ -1,4 +1,5 @@
-// npm run bench: analysis speed on each example, and solve time against segment count.
+// npm run bench: analysis speed on each example, solve time against segment count, and (compare-batch.ts)
+// the comparison and batch timings.
 // Targets (issue): all combinations of an example analysed (P-delta, stations, extremes) in under
 // 50 ms; solve time about linear in the number of segments (40 -> 640 segments, 16x, costing no
 // more than about 25x). Measured and printed only; never asserted.
@@ -19,6 +20,7 @@ import { scalingTable } from './scaling.ts';
 import { fmtTiming, summarise, type Timing } from './timing.ts';
 import { printCalculixComparison } from './calculix-compare.ts';
 import { printRefusalTiming } from './refusal-timing.ts';
+import { printCompareAndBatchBench } from './compare-batch.ts';
 
 const RUNS = 41;
 const WARMUP = 5;
@@ -152,3 +154,5 @@ console.log(
 printRefusalTiming();
 
 await printCalculixComparison();
+
+await printCompareAndBatchBench();

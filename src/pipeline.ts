@@ -1,6 +1,6 @@
 // The library API: one input file to a calculation package. Data flows one way:
 // input -> design -> frame model -> loads -> analysis -> checks -> document -> PDF / JSON.
-import { loadDesignFile } from './input/index.ts';
+import { loadDesignFile, loadDesignText } from './input/index.ts';
 import type { LoadedDesign } from './design/design.ts';
 import { analyseDesign } from './analyse-design.ts';
 import type { DesignAnalysis } from './analyse-design.ts';
@@ -44,12 +44,42 @@ export interface PackageResult {
 }
 
 export async function buildPackage(file: string, opts: BuildOptions = {}): Promise<PackageResult> {
+  return packageOf(loadForBuild(file, opts), opts);
+}
+
+/** The input stage of a build: the file read, validated and refused if the PDF fonts cannot print it. */
+export function loadForBuild(file: string, opts: BuildOptions = {}): LoadedDesign {
   const loaded = loadDesignFile(file, { SOURCE_DATE_EPOCH: opts.env?.SOURCE_DATE_EPOCH });
   assertPrintable(loaded);
   // An issued revision rebuilt from a changed input is refused before any work.
-  const issuedRegister = issuedRegisterUpdate(loaded);
+  issuedRegisterUpdate(loaded);
+  return loaded;
+}
+
+/** The same for input text held in memory as if read from `file` (an alternative of a comparison). */
+export function loadTextForBuild(text: string, file: string, opts: BuildOptions = {}): LoadedDesign {
+  const loaded = loadDesignText(text, file, { SOURCE_DATE_EPOCH: opts.env?.SOURCE_DATE_EPOCH });
+  assertPrintable(loaded);
+  return loaded;
+}
+
+export interface CheckedDesign {
+  readonly analysis: DesignAnalysis;
+  readonly checks: CheckResults;
+}
+
+/** Analysis and checks of a loaded design: the engineering of a build, shared by every command
+ * (a comparison's alternatives go through exactly this, so each row is what a build gives). */
+export function analyseAndCheck(loaded: LoadedDesign, opts: BuildOptions = {}): CheckedDesign {
   const analysis = analyseDesign(loaded.design, { firstOrder: opts.firstOrder });
   const checks = runChecks(loaded.design, analysis);
+  return { analysis, checks };
+}
+
+/** The package of a loaded design: analysis, checks, document, PDF and JSON. */
+export async function packageOf(loaded: LoadedDesign, opts: BuildOptions = {}, checked: CheckedDesign = analyseAndCheck(loaded, opts)): Promise<PackageResult> {
+  const { analysis, checks } = checked;
+  const issuedRegister = issuedRegisterUpdate(loaded);
   const summaryPage = summarySection(loaded, analysis, checks, { checks: CHECKS_TITLE, results: RESULTS_TITLE });
   const document = buildDocument(loaded, { sections: analysisSections(loaded, analysis, checkSections(loaded, analysis, checks)), secondOrder: analysis.options.secondOrder, checks, summary: summaryPage });
   const pdf = await renderPdf(document);

@@ -4,6 +4,8 @@ export interface ParsedArgs {
   readonly positionals: readonly string[];
   readonly flags: ReadonlySet<string>;
   readonly values: ReadonlyMap<string, string>;
+  /** Every value of the repeatable options, in order. */
+  readonly lists: ReadonlyMap<string, readonly string[]>;
 }
 
 export interface ArgSpec {
@@ -11,6 +13,8 @@ export interface ArgSpec {
   readonly flags: readonly string[];
   /** Options that take one value. */
   readonly values: readonly string[];
+  /** Options that take one value and may be given again (--vary a=1 --vary b=2). */
+  readonly repeatable?: readonly string[];
 }
 
 export class UsageError extends Error {}
@@ -19,6 +23,7 @@ export function parseArgs(argv: readonly string[], spec: ArgSpec): ParsedArgs {
   const positionals: string[] = [];
   const flags = new Set<string>();
   const values = new Map<string, string>();
+  const lists = new Map<string, string[]>();
   for (let k = 0; k < argv.length; k++) {
     const arg = argv[k]!;
     if (!arg.startsWith('-') || arg === '-') {
@@ -31,13 +36,18 @@ export function parseArgs(argv: readonly string[], spec: ArgSpec): ParsedArgs {
     } else if (spec.flags.includes(name)) {
       if (inline !== undefined) throw new UsageError(`option --${name} takes no value`);
       flags.add(name);
+    } else if (spec.repeatable?.includes(name)) {
+      const value = inline ?? argv[++k];
+      if (value === undefined) throw new UsageError(`option --${name} needs a value`);
+      lists.set(name, [...(lists.get(name) ?? []), value]);
     } else if (spec.values.includes(name)) {
       const value = inline ?? argv[++k];
       if (value === undefined) throw new UsageError(`option --${name} needs a value`);
+      if (values.has(name)) throw new UsageError(`option --${name} is given twice`);
       values.set(name, value);
     } else {
       throw new UsageError(`unknown option ${arg}`);
     }
   }
-  return { positionals, flags, values };
+  return { positionals, flags, values, lists };
 }

@@ -7,6 +7,8 @@ import { buildCommand } from './commands/build.ts';
 import { checkCommand } from './commands/check.ts';
 import { schemaCommand } from './commands/schema.ts';
 import { newCommand } from './commands/new.ts';
+import { compareCommand } from './commands/compare.ts';
+import { indexCommand } from './commands/index-command.ts';
 import { toolVersion } from '../version.ts';
 
 export interface Command {
@@ -16,7 +18,7 @@ export interface Command {
   readonly run: (argv: readonly string[], io: CliIO) => Promise<number>;
 }
 
-const COMMANDS: readonly Command[] = [buildCommand, checkCommand, schemaCommand, newCommand];
+const COMMANDS: readonly Command[] = [buildCommand, compareCommand, indexCommand, checkCommand, schemaCommand, newCommand];
 
 function mainHelp(): string {
   const width = Math.max(...COMMANDS.map((c) => c.name.length));
@@ -29,8 +31,8 @@ function mainHelp(): string {
     ...COMMANDS.map((c) => `  ${c.name.padEnd(width)}  ${c.summary}`),
     '',
     'Options:',
-    '  --help, -h   show help (also after a command: polebook build --help)',
-    '  --version    print the version',
+    '  --help, -h     show help (also after a command: polebook build --help)',
+    '  --version, -v  print the version',
     '',
     'Exit codes: 0 done, 1 a design check fails, 2 bad input, 3 unstable or unsolvable structure, 4 internal error.',
     'The package is a draft for review by a licensed engineer; it defers to the governing codes.',
@@ -45,7 +47,7 @@ export async function runCli(argv: readonly string[], io: CliIO): Promise<number
     (name === undefined ? io.stderr : io.stdout)(mainHelp());
     return name === undefined ? EXIT.badInput : EXIT.ok;
   }
-  if (name === '--version' || name === '-V') {
+  if (name === '--version' || name === '-V' || name === '-v') {
     io.stdout(`polebook ${toolVersion()}\n`);
     return EXIT.ok;
   }
@@ -66,7 +68,8 @@ export async function runCli(argv: readonly string[], io: CliIO): Promise<number
       return EXIT.badInput;
     }
     if (err instanceof InputError) {
-      for (const d of err.diagnostics) io.stderr(`${paint.error(formatDiagnostic(d))}\n`);
+      // Warnings in their own colour: only errors are red.
+      for (const d of err.diagnostics) io.stderr(`${(d.severity === 'warning' ? paint.warn : paint.error)(formatDiagnostic(d))}\n`);
       const n = err.diagnostics.filter((d) => d.severity === 'error').length;
       io.stderr(`${n} error${n === 1 ? '' : 's'}; nothing was written.\n`);
       return EXIT.badInput;

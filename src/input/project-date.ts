@@ -17,6 +17,6 @@ export function packageDate(
   }
   const newest = revisions.map((r) => r.date).sort().at(-1);
   if (newest !== undefined) return newest;
-  problems.push(error(['project', 'date'], 'no date for the package: give project.date (yyyy-mm-dd) or a revision with a date'));
+  problems.push(error(['project', 'date'], 'no date for the package: give project.date (yyyy-mm-dd), or a revision with a date (project.revisions[].date), or set SOURCE_DATE_EPOCH (seconds since 1970-01-01 UTC) in the environment'));
   return '';
 }

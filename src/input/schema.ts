@@ -187,6 +187,19 @@ function analysisSchema(system: UnitSystem) {
   });
 }
 
+/** Alternatives for `polebook compare` (read and checked by src/compare/; `build` ignores the block). */
+function compareSchema() {
+  const vary = z.strictObject({
+    path: z.string().min(1, { error: 'must not be empty' }).meta({ description: 'What to vary, addressed by ids: e.g. A1.length (the length of arm A1), S1.position (panel S1), pole.section.wall, structure.arms[0].section.wall' }),
+    values: z
+      .union([z.string(), z.number(), z.array(z.union([z.string(), z.number()])).min(1)])
+      .meta({ description: 'A list ("28, 32, 36 ft" or [28, 32, 36]) or a range ("20 ft..45 ft:5 ft", end included); numbers without a unit take the unit of the key' }),
+  });
+  return z
+    .strictObject({ vary: z.array(vary).min(1, { error: 'give at least one key to vary' }) })
+    .meta({ description: 'Alternatives compared by `polebook compare` (several vary entries make a grid); `polebook build` ignores this block' });
+}
+
 export function buildInputSchema(system: UnitSystem) {
   return z
     .strictObject({
@@ -259,6 +272,7 @@ export function buildInputSchema(system: UnitSystem) {
         .meta({ description: "'default' (the default set, labelled in the package) or a list of combinations with their factors" }),
       criteria: criteriaSchema(system).optional(),
       analysis: analysisSchema(system).optional(),
+      compare: compareSchema().optional(),
     })
     .meta({ title: 'polebook input', description: 'Input file of polebook: one pole with its arms, attachments, loads and criteria' });
 }

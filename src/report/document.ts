@@ -75,6 +75,8 @@ export interface DocumentMeta {
   readonly analysisOrder: string;
   /** The user's unit system: quantities in calculation steps print in it; it also picks the page size. */
   readonly units: UnitSystem;
+  /** What the document is, printed above the structure id on the cover; default 'CALCULATION PACKAGE'. */
+  readonly documentTitle?: string;
 }
 
 export interface DocumentModel {

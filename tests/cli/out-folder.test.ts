@@ -143,7 +143,7 @@ describe('build --out: an earlier package the user protected is not replaced', (
     chmodSync(json, 0o444);
     const r = await cli(['build', EXAMPLE, '--out', out], { env: ENV });
     expect(r.code).toBe(0);
-    expect(r.stdout).toContain(`wrote ${join(out, 'luminaire-twin.pdf')}`);
+    expect(r.stderr).toContain(`wrote ${join(out, 'luminaire-twin.pdf')}`);
     expect(readFileSync(join(out, 'luminaire-twin.pdf')).subarray(0, 5).toString()).toBe('%PDF-');
     expect(readFileSync(json, 'utf8')).toBe('{"earlier": true}');
   }, 60_000);

@@ -162,7 +162,7 @@ describe('defaults and assumptions', () => {
 describe('JSON Schema and hash', () => {
   it('the JSON Schema has our top-level keys and refuses unknown ones', () => {
     const s = designJsonSchema() as { properties: Record<string, unknown>; required: string[]; additionalProperties: boolean };
-    expect(Object.keys(s.properties)).toEqual(['formatVersion', 'units', 'project', 'structure', 'attachments', 'loads', 'combinations', 'criteria', 'analysis']);
+    expect(Object.keys(s.properties)).toEqual(['formatVersion', 'units', 'project', 'structure', 'attachments', 'loads', 'combinations', 'criteria', 'analysis', 'compare']);
     expect(s.required).toEqual(['formatVersion', 'units', 'project', 'structure', 'loads']);
     expect(s.additionalProperties).toBe(false);
     expect(JSON.stringify(s)).toContain('29000 ksi');

@@ -8,6 +8,7 @@ import { STRUCTURE_KINDS, starterInput } from '../../input/index.ts';
 import type { StructureKind } from '../../design/design.ts';
 import { writeFileAtomic } from '../../output/write-atomic.ts';
 import { painter } from '../io.ts';
+import { commandName } from '../command-name.ts';
 
 const HELP = `Usage: polebook new <kind> [file] [--units us|si] [--force]
 
@@ -43,7 +44,9 @@ export const newCommand: Command = {
       return EXIT.badInput;
     }
     writeFileAtomic(path, text);
-    io.stdout(`${painter(io).good('wrote')} ${path}\nEdit it, then: polebook check ${file} && polebook build ${file}\n`);
+    const run = commandName(io);
+    io.stderr(`${painter(io).good('wrote')} ${path}\n`);
+    io.stderr(`Edit it, then: ${run} check ${file} && ${run} build ${file}\n`);
     return EXIT.ok;
   },
 };

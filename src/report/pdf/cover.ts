@@ -22,7 +22,7 @@ export function titleBlock(meta: DocumentMeta): Content[] {
     { text: v, fontSize: 9, bold: k === 'Structure' },
   ]);
   return [
-    { text: 'CALCULATION PACKAGE', color: COLOR.accent, bold: true, fontSize: 10, characterSpacing: 2, margin: [0, 0, 0, 4] },
+    { text: meta.documentTitle ?? 'CALCULATION PACKAGE', color: COLOR.accent, bold: true, fontSize: 10, characterSpacing: 2, margin: [0, 0, 0, 4] },
     { text: meta.structureId, fontSize: 24, bold: true, margin: [0, 0, 0, 2] },
     { text: meta.structureKind, fontSize: 13, color: COLOR.text, margin: [0, 0, 0, 2] },
     { text: meta.projectName, fontSize: 11, color: COLOR.muted, margin: [0, 0, 0, 6] },

@@ -44,7 +44,7 @@ export function documentDefinition(doc: DocumentModel): TDocumentDefinitions {
     pageSize: pageSizeFor(meta.units),
     pageMargins: PAGE_MARGINS,
     info: {
-      title: `Calculation package ${meta.structureId}, revision ${meta.revision}`,
+      title: `${meta.documentTitle === undefined ? 'Calculation package' : meta.documentTitle.charAt(0) + meta.documentTitle.slice(1).toLowerCase()} ${meta.structureId}, revision ${meta.revision}`,
       author: meta.owner,
       subject: `${meta.projectName}; input ${meta.inputFile}; input SHA-256 ${meta.inputHash}`,
       keywords: `input-hash ${meta.inputHash}; structure ${meta.structureId}; revision ${meta.revision}; analysis ${meta.analysisOrder}`,
