@@ -81,7 +81,7 @@ export async function packageOf(loaded: LoadedDesign, opts: BuildOptions = {}, c
   const { analysis, checks } = checked;
   const issuedRegister = issuedRegisterUpdate(loaded);
   const summaryPage = summarySection(loaded, analysis, checks, { checks: CHECKS_TITLE, results: RESULTS_TITLE });
-  const document = buildDocument(loaded, { sections: analysisSections(loaded, analysis, checkSections(loaded, analysis, checks)), secondOrder: analysis.options.secondOrder, checks, summary: summaryPage });
+  const document = buildDocument(loaded, { sections: analysisSections(loaded, analysis, checkSections(loaded, analysis, checks), checks), secondOrder: analysis.options.secondOrder, checks, summary: summaryPage });
   const pdf = await renderPdf(document);
   const json = opts.json
     ? resultsJson({ loaded, toolVersion: toolVersion(), ...analysis, secondOrder: analysis.options.secondOrder, checks })

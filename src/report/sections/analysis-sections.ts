@@ -12,8 +12,11 @@ import { handCheckSection } from './hand-check-section.ts';
 import { loadCasesSections } from './load-cases-section.ts';
 import { resultsSection, staticsTablesSection } from './results-section.ts';
 import { structuralModelSection } from './structural-model-section.ts';
+import { freeBodySection } from './free-body-section.ts';
+import type { CheckResults } from '../../checks/check-types.ts';
 
-export function analysisSections(loaded: LoadedDesign, analysis: DesignAnalysis, checkSections: readonly DocSection[] = []): DocSection[] {
+/** With the checks, the free-body diagrams of the combinations that govern them follow the results. */
+export function analysisSections(loaded: LoadedDesign, analysis: DesignAnalysis, checkSections: readonly DocSection[] = [], checks: CheckResults | null = null): DocSection[] {
   const loads = loadCasesSections(loaded, analysis);
   return [
     structuralModelSection(loaded, analysis),
@@ -21,6 +24,7 @@ export function analysisSections(loaded: LoadedDesign, analysis: DesignAnalysis,
     loads.main,
     combinationsSection(loaded, analysis),
     resultsSection(loaded, analysis),
+    ...(checks ? [freeBodySection(loaded, analysis, checks)] : []),
     diagramsSection(loaded, analysis),
     ...checkSections,
     handCheckSection(loaded, analysis),

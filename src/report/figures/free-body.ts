@@ -1,0 +1,214 @@
+// A free-body diagram of the whole structure in one view (elevation or plan), drawn to scale:
+// the members as their axes, every applied load group as an arrow ending at its point (length
+// proportional to the force component in the view, labelled with that component and its unit),
+// components out of the view as a dot (toward the reader) or a cross (away), the wind direction,
+// and the base reactions as arrows (forces) and double-headed arrows (moments, right-hand rule).
+// Numbers arrive as text (the caller formats them); this file only places them, so that no label
+// overlaps another or the structure's axis lines.
+import type { Vec3 } from '../../model/frame.ts';
+import { measureText } from '../charts/text-measure.ts';
+import { boxOf, fitFrame, viewCoords, type Box, type Frame2D, type ViewKind } from './projection.ts';
+import type { Scene } from './structure-drawing.ts';
+import { arrow, circle, doubleArrow, group, INK, line, rect, svgDocument, text, type Pt } from './svg.ts';
+
+export interface FreeBodyLoad {
+  readonly at: Vec3;
+  /** Force, N (global). */
+  readonly force: Vec3;
+  /** Short name, e.g. "S1" or "wind on pole". */
+  readonly name: string;
+}
+
+export interface FreeBodyOptions {
+  readonly view: ViewKind;
+  /** Formats a force magnitude (N) with its unit. */
+  readonly force: (N: number) => string;
+  /** Formats a moment magnitude (N m) with its unit. */
+  readonly moment: (Nm: number) => string;
+  /** The base reactions (by the support on the structure), global, N and N m; null for a load diagram. */
+  readonly reaction: { readonly at: Vec3; readonly force: Vec3; readonly moment: Vec3 } | null;
+  /** Plan direction the wind blows toward, or null. */
+  readonly wind: Vec3 | null;
+  readonly windLabel: string;
+  /** Names of the view's axes: right and up on the page. */
+  readonly axisNames: readonly [string, string];
+  readonly width?: number;
+  readonly maxHeight?: number;
+}
+
+const LOAD_COLOR = '#b03a2e';
+const REACTION_COLOR = '#1f5f8b';
+const MAX_ARROW = 62;
+const MIN_ARROW = 16;
+const LABEL_SIZE = 6.8;
+
+type Rect = readonly [number, number, number, number];
+
+const overlaps = (a: Rect, b: Rect): boolean => a[0] < b[2] && b[0] < a[2] && a[1] < b[3] && b[1] < a[3];
+
+/** Page direction of a global vector in the view (unit), and its length in the view. */
+function inView(view: ViewKind, v: Vec3): { d: Pt; len: number; normal: number } {
+  const [u, w] = viewCoords(view, v);
+  const len = Math.hypot(u, w);
+  // The component along the view normal, toward the reader positive: up in plan; in elevation
+  // right x up = (h_y, -h_x, 0), the reader looking along (-h_y, h_x).
+  const normal = view.kind === 'plan' ? v[2] : v[0] * view.horizontal[1] - v[1] * view.horizontal[0];
+  return { d: len > 0 ? [u / len, -w / len] : [0, 0], len, normal };
+}
+
+/** Places a label beside (x, y): the first of a ring of places around it, nearest first, that
+ * overlaps nothing placed so far and stays inside the figure. */
+function placeLabel(taken: Rect[], x: number, y: number, content: string, bounds: Rect): { x: number; y: number } {
+  const w = measureText({ fontSize: LABEL_SIZE }, content);
+  const h = LABEL_SIZE + 2;
+  const rectAt = (left: number, base: number): Rect => [left - 1, base - LABEL_SIZE, left + w + 1, base + 2];
+  const candidates: [number, number][] = [];
+  for (let ring = 0; ring < 7; ring++) {
+    const r = ring * h;
+    candidates.push([x + 3, y - 2 - r], [x - w - 3, y - 2 - r], [x + 3, y + LABEL_SIZE + r], [x - w - 3, y + LABEL_SIZE + r], [x - w / 2, y - 4 - r], [x - w / 2, y + LABEL_SIZE + 3 + r]);
+  }
+  for (const [left, base] of candidates) {
+    const r = rectAt(left, base);
+    const inside = r[0] >= bounds[0] && r[2] <= bounds[2] && r[1] >= bounds[1] && r[3] <= bounds[3];
+    if (inside && !taken.some((t) => overlaps(t, r))) {
+      taken.push(r);
+      return { x: left, y: base };
+    }
+  }
+  taken.push(rectAt(x + 3, y - 2));
+  return { x: x + 3, y: y - 2 };
+}
+
+/** Small squares along a drawn segment, so labels keep off it. */
+function segmentRects(a: Pt, b: Pt, half = 2.5): Rect[] {
+  const out: Rect[] = [];
+  const steps = Math.max(1, Math.ceil(Math.hypot(b[0] - a[0], b[1] - a[1]) / 5));
+  for (let k = 0; k <= steps; k++) {
+    const x = a[0] + ((b[0] - a[0]) * k) / steps;
+    const y = a[1] + ((b[1] - a[1]) * k) / steps;
+    out.push([x - half, y - half, x + half, y + half]);
+  }
+  return out;
+}
+
+/** The member axes, so labels keep off the structure. */
+function axisRects(f: Frame2D, scene: Scene): Rect[] {
+  return scene.members.flatMap((m) => segmentRects(f.at(m.root), f.at(m.tip)));
+}
+
+export function freeBodyDiagram(scene: Scene, loads: readonly FreeBodyLoad[], opts: FreeBodyOptions): { svg: string; width: number; height: number } {
+  const width = opts.width ?? 480;
+  const maxHeight = opts.maxHeight ?? 360;
+  const view = opts.view;
+  const drawn = loads.map((l) => ({ l, v: inView(view, l.force) }));
+  const reactionF = opts.reaction ? inView(view, opts.reaction.force) : null;
+  const biggest = Math.max(1e-9, ...drawn.map((x) => x.v.len), reactionF?.len ?? 0);
+  const arrowLength = (len: number) => MIN_ARROW + (MAX_ARROW - MIN_ARROW) * (len / biggest);
+  // Fit the structure with room around it for the arrows and their labels.
+  const pts = scene.members.flatMap((m) => [viewCoords(view, m.root), viewCoords(view, m.tip)]);
+  pts.push(viewCoords(view, [0, 0, 0]));
+  const box0: Box = boxOf(pts);
+  const pad = MAX_ARROW + 12;
+  const boxH = box0.vMax - box0.vMin;
+  const boxW = box0.uMax - box0.uMin;
+  const scale = Math.min((width - 2 * pad) / Math.max(boxW, 1e-6), (maxHeight - 2 * pad) / Math.max(boxH, 1e-6));
+  const height = Math.min(maxHeight, boxH * scale + 2 * pad);
+  const f = fitFrame(view, box0, pad, pad, width - 2 * pad, height - 2 * pad);
+  const bounds: Rect = [2, 2, width - 2, height - 2];
+  const taken: Rect[] = axisRects(f, scene);
+  const body: string[] = [];
+  // Members: axis lines; the base: a short hatched line in elevation, a circle in plan.
+  for (const m of scene.members) {
+    const a = f.at(m.root);
+    const b = f.at(m.tip);
+    body.push(line(a[0], a[1], b[0], b[1], { color: INK.member, width: 2 }));
+    if (m.link) {
+      const p = f.at(m.link);
+      body.push(line(p[0], p[1], a[0], a[1], { color: INK.member, width: 2 }));
+    }
+  }
+  const [bx, by] = f.at([0, 0, 0]);
+  if (view.kind === 'elevation') {
+    body.push(line(bx - 14, by, bx + 14, by, { color: INK.text, width: 1 }));
+    for (let k = -12; k <= 12; k += 6) body.push(line(bx + k, by, bx + k - 4, by + 5, { color: INK.text, width: 0.6 }));
+    taken.push([bx - 16, by - 2, bx + 16, by + 7]);
+  } else {
+    body.push(circle(bx, by, 4, 'none', { color: INK.text, width: 0.8 }));
+  }
+  // Applied loads: the arrows first (reserved, so no label covers one), then their labels.
+  const labels: { x: number; y: number; content: string; color: string; bold?: boolean }[] = [];
+  for (const { l, v } of drawn) {
+    const [px, py] = f.at(l.at);
+    const size3 = Math.hypot(...l.force);
+    const outOfView = Math.abs(v.normal) > 0.05 * size3 && Math.abs(v.normal) > 1e-9 * biggest;
+    if (v.len > 0.05 * size3 && v.len > 1e-9 * biggest) {
+      const L = arrowLength(v.len);
+      const tx = px - v.d[0] * L;
+      const ty = py - v.d[1] * L;
+      body.push(arrow(tx, ty, px, py, { color: LOAD_COLOR, width: 1.1, head: 5 }));
+      taken.push(...segmentRects([tx, ty], [px, py], 2));
+      labels.push({ x: tx, y: ty, content: `${l.name} ${opts.force(v.len)}`, color: LOAD_COLOR });
+    }
+    // In plan the vertical components (weights) are not marked: they are the elevation's.
+    if (outOfView && view.kind === 'elevation') {
+      // Out of the view: a dot (toward the reader) or a cross (away), labelled with that component.
+      const r = 3.2;
+      body.push(circle(px, py, r, '#ffffff', { color: LOAD_COLOR, width: 0.9 }));
+      if (v.normal > 0) body.push(circle(px, py, 0.9, LOAD_COLOR));
+      else body.push(line(px - 2.2, py - 2.2, px + 2.2, py + 2.2, { color: LOAD_COLOR, width: 0.8 }), line(px - 2.2, py + 2.2, px + 2.2, py - 2.2, { color: LOAD_COLOR, width: 0.8 }));
+      taken.push([px - r, py - r, px + r, py + r]);
+      labels.push({ x: px + 2, y: py, content: `${l.name} ${opts.force(Math.abs(v.normal))}`, color: LOAD_COLOR });
+    }
+  }
+  // Base reactions: the force in the view ending at the base, the moment in the view as a
+  // double-headed arrow (its vector).
+  if (opts.reaction && reactionF) {
+    const drop = view.kind === 'elevation' ? 6 : 0;
+    if (reactionF.len > 1e-9 * biggest) {
+      const L = arrowLength(reactionF.len);
+      const tx = bx - reactionF.d[0] * L;
+      const ty = by - reactionF.d[1] * L + drop;
+      body.push(arrow(tx, ty, bx, by + drop, { color: REACTION_COLOR, width: 1.3, head: 6 }));
+      taken.push(...segmentRects([tx, ty], [bx, by + drop], 2));
+      labels.push({ x: tx, y: ty, content: `R ${opts.force(reactionF.len)}`, color: REACTION_COLOR, bold: true });
+    }
+    const m = inView(view, opts.reaction.moment);
+    if (m.len > 1e-9) {
+      const L = 34;
+      const ox = bx + 24;
+      const oy = by + drop + 12;
+      const ex = ox + m.d[0] * L;
+      const ey = oy + m.d[1] * L;
+      body.push(doubleArrow(ox, oy, ex, ey, { color: REACTION_COLOR, width: 1.1, head: 5 }));
+      taken.push(...segmentRects([ox, oy], [ex, ey], 2));
+      labels.push({ x: ex, y: ey, content: `M ${opts.moment(m.len)}`, color: REACTION_COLOR, bold: true });
+    }
+  }
+  // Wind direction, top left, and the view's axes, bottom right.
+  if (opts.wind) {
+    const w = inView(view, opts.wind);
+    const x0 = 12;
+    const y0 = 14;
+    if (w.len > 0.2) {
+      body.push(arrow(x0 + 16 - w.d[0] * 14, y0 + 8 - w.d[1] * 14, x0 + 16 + w.d[0] * 14, y0 + 8 + w.d[1] * 14, { color: INK.text, width: 1.4, head: 6 }));
+    } else {
+      body.push(circle(x0 + 16, y0 + 8, 5, '#ffffff', { color: INK.text, width: 1 }));
+      if (w.normal > 0) body.push(circle(x0 + 16, y0 + 8, 1.2, INK.text));
+      else body.push(line(x0 + 13, y0 + 5, x0 + 19, y0 + 11, { color: INK.text, width: 0.9 }), line(x0 + 13, y0 + 11, x0 + 19, y0 + 5, { color: INK.text, width: 0.9 }));
+    }
+    body.push(text(x0 + 36, y0 + 11, opts.windLabel, { size: 7 }));
+    taken.push([x0, y0, x0 + 40 + measureText({ fontSize: 7 }, opts.windLabel), y0 + 16]);
+  }
+  // The view's axes, bottom left.
+  const ax = 14;
+  const ay = height - 10;
+  body.push(group([arrow(ax, ay, ax + 18, ay, { width: 0.7, head: 4 }), arrow(ax, ay, ax, ay - 18, { width: 0.7, head: 4 })]));
+  body.push(text(ax + 21, ay + 2.5, opts.axisNames[0], { size: 7 }), text(ax + 3, ay - 21, opts.axisNames[1], { size: 7 }));
+  taken.push([ax - 2, ay - 30, ax + 24 + measureText({ fontSize: 7 }, opts.axisNames[0]), ay + 4]);
+  for (const lb of labels) {
+    const at = placeLabel(taken, lb.x, lb.y, lb.content, bounds);
+    body.push(text(at.x, at.y, lb.content, { size: LABEL_SIZE, color: lb.color, bold: lb.bold }));
+  }
+  body.unshift(rect(0, 0, width, height, '#ffffff'));
+  return { svg: svgDocument(width, height, body), width, height };
+}

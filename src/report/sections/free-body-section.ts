@@ -1,0 +1,123 @@
+// Section "Free-body diagrams": for each combination that governs a check, the whole structure in
+// elevation and plan with every applied load group and the base reactions, drawn to scale, with a
+// table of the same loads so every arrow can be read as numbers; then a load diagram of each load
+// case (unfactored) on the elevation. Reads the loads and results; computes only the sums it prints.
+import type { DesignAnalysis } from '../../analyse-design.ts';
+import type { CheckResults } from '../../checks/check-types.ts';
+import { CHECK_TITLES, verdictByType } from '../../checks/verdict.ts';
+import type { LoadedDesign } from '../../design/design.ts';
+import { combinedLoads } from '../../analysis/analyze.ts';
+import { loadGroups, type LoadGroup } from '../../loads/load-groups.ts';
+import type { Combination, LoadCase } from '../../loads/load-types.ts';
+import type { Vec3 } from '../../model/frame.ts';
+import type { Block, DocSection } from '../document.ts';
+import { freeBodyDiagram, type FreeBodyOptions } from '../figures/free-body.ts';
+import { display, type Display } from './display.ts';
+import { buildScene, mainArm } from './elevation-plan-section.ts';
+import { wholeId } from './check-text.ts';
+import { withoutRoundOff } from './round-off.ts';
+import { templateBlocks } from './templates.ts';
+
+export const FREE_BODY_TITLE = 'Free-body diagrams';
+/** At most this many governing combinations are drawn (the worst first); the rest are in the tables of the checks. */
+const MAX_COMBINATIONS = 4;
+
+const windVector = (rad: number): Vec3 => [Math.cos(rad), Math.sin(rad), 0];
+
+export function freeBodySection(loaded: LoadedDesign, analysis: DesignAnalysis, checks: CheckResults): DocSection {
+  const { design } = loaded;
+  const d = display(design.units);
+  const scene = buildScene(design, (m) => (m === 'pole' ? 'pole' : m), '');
+  const main = mainArm(design);
+  const phi = main ? main.direction_rad : 0;
+  const horizontal: Vec3 = [Math.cos(phi), Math.sin(phi), 0];
+  const rightName = main ? `along ${main.id}` : '+X';
+  const base = (wind: Vec3 | null, windLabel: string, reaction: FreeBodyOptions['reaction']) => ({
+    force: (N: number) => d.q(N, 'force'),
+    moment: (Nm: number) => d.q(Nm, 'moment'),
+    wind,
+    windLabel,
+    reaction,
+  });
+  // The combinations that govern a check, worst ratio first, each once.
+  const governing = new Map<string, string[]>();
+  for (const v of [...verdictByType(checks.records)].sort((a, b) => b.worst.ratio - a.worst.ratio)) {
+    const id = v.worst.combination;
+    if (id === null || !analysis.combinations.some((c) => c.id === id)) continue;
+    governing.set(id, [...(governing.get(id) ?? []), CHECK_TITLES[v.type].toLowerCase()]);
+  }
+  const combos = [...governing.keys()].slice(0, MAX_COMBINATIONS).map((id) => analysis.combinations.find((c) => c.id === id)!);
+  const shortName = shortNamer(design.attachments.map((a) => a.id));
+  const blocks: Block[] = [...templateBlocks('free-body', { count: String(combos.length) }).blocks];
+  for (const combo of combos) {
+    const groups = loadGroups(analysis.model, combinedLoads(analysis.cases, combo));
+    const wind = windOf(analysis.cases, combo);
+    const r = analysis.results[combo.id]!.reactions[0]!;
+    const reaction = { at: analysis.model.nodes[r.node]!.xyz_m, force: [r.force[0], r.force[1], r.force[2]] as Vec3, moment: [r.force[3], r.force[4], r.force[5]] as Vec3 };
+    const windLabel = wind === null ? 'no wind' : `wind toward ${d.angle(wind)}`;
+    const loads = groups.filter((g) => Math.hypot(...g.force_N) > 0).map((g) => ({ at: g.at_m, force: g.force_N, name: shortName(g.source) }));
+    const elevation = freeBodyDiagram(scene, loads, { ...base(wind === null ? null : windVector(wind), windLabel, reaction), view: { kind: 'elevation', horizontal }, axisNames: [rightName, 'Z'], maxHeight: 300 });
+    const plan = freeBodyDiagram(scene, loads, { ...base(wind === null ? null : windVector(wind), windLabel, reaction), view: { kind: 'plan' }, axisNames: ['X', 'Y'], maxHeight: 260 });
+    blocks.push({ kind: 'heading', level: 2, text: `Combination ${wholeId(combo.id)}` });
+    blocks.push({ kind: 'paragraph', text: `${combo.description}. It governs: ${governing.get(combo.id)!.join('; ')}.` });
+    blocks.push({ kind: 'figure', title: `Free body, ${combo.id}, elevation`, svg: elevation.svg, width_pt: elevation.width, caption: `Looking square to ${main ? `arm ${main.id}` : 'the X axis'}. Factored loads (red), each the resultant of one load source at the centroid of its parts, with its component in this view; a dot or a cross marks a component toward or away from the reader. Base reactions on the structure (blue): force R and moment M (double-headed arrow, right-hand rule). To scale.` });
+    // A plan only when something acts horizontally (not for a dead-load combination).
+    const horizontalLoad = groups.some((g) => Math.hypot(g.force_N[0], g.force_N[1]) > 1e-6 * Math.hypot(...g.force_N));
+    if (horizontalLoad) blocks.push({ kind: 'figure', title: `Free body, ${combo.id}, plan`, svg: plan.svg, width_pt: plan.width, caption: 'Looking down, X to the right. Horizontal components of the same loads and of the base reactions (vertical components are in the elevation). To scale.' });
+    blocks.push(loadTable(combo, groups, r.force, d));
+  }
+  blocks.push({ kind: 'heading', level: 2, text: 'Load diagrams of the load cases' });
+  blocks.push({ kind: 'paragraph', text: 'Each load case as applied, unfactored, on the elevation; the loads in numbers are in section "Loads" (sums) and in the appendix of load calculation steps.' });
+  for (const lc of analysis.cases) {
+    const groups = loadGroups(analysis.model, lc.loads.map((load) => ({ load, factor: 1 })));
+    const loads = groups.filter((g) => Math.hypot(...g.force_N) > 0).map((g) => ({ at: g.at_m, force: g.force_N, name: shortName(g.source) }));
+    const wind = lc.windAngle_rad;
+    const fig = freeBodyDiagram(scene, loads, { ...base(wind === null ? null : windVector(wind), wind === null ? '' : `wind toward ${d.angle(wind)}`, null), view: { kind: 'elevation', horizontal }, axisNames: [rightName, 'Z'], maxHeight: 230 });
+    blocks.push({ kind: 'figure', title: `Load case ${lc.id}`, svg: fig.svg, width_pt: fig.width, caption: `${lc.description}. Unfactored loads, each the resultant of one load source at the centroid of its parts, with its component in the view. To scale.` });
+  }
+  return { id: 'free-body', title: FREE_BODY_TITLE, blocks };
+}
+
+/** The plan angle of the combination's wind, or null without wind. */
+function windOf(cases: readonly LoadCase[], combo: Combination): number | null {
+  for (const f of combo.factors) {
+    const lc = cases.find((c) => c.id === f.caseId);
+    if (lc && lc.windAngle_rad !== null && f.factor !== 0) return lc.windAngle_rad;
+  }
+  return null;
+}
+
+/** The label of a load source: an attachment's id, or "weight, pole" / "wind, arm SA" for a member. */
+function shortNamer(ids: readonly string[]): (source: string) => string {
+  return (source) => {
+    const last = source.split(' ').at(-1) ?? source;
+    if (ids.includes(last) && !/\b(pole|arm)\b/.test(source.slice(0, -last.length))) return last;
+    const s = source.replace(/^self-weight of (the )?/, 'weight, ').replace(/^(wind|natural gust|truck gust|galloping) on (the )?/, '$1, ');
+    return s.length > 28 ? `${s.slice(0, 26)}…` : s;
+  };
+}
+
+function loadTable(combo: Combination, groups: readonly LoadGroup[], reaction: readonly number[], d: Display): Block {
+  const sum = [0, 0, 0];
+  for (const g of groups) for (let k = 0; k < 3; k++) sum[k] += g.force_N[k];
+  const big = Math.max(...groups.flatMap((g) => g.force_N.map(Math.abs)), ...reaction.slice(0, 3).map(Math.abs));
+  const f = (v: number) => d.q(withoutRoundOff(v, big), 'force');
+  const len = (v: number) => d.q(v, 'length');
+  const rows = groups
+    .filter((g) => Math.hypot(...g.force_N) > 0)
+    .map((g) => [g.source, f(g.force_N[0]), f(g.force_N[1]), f(g.force_N[2]), `${len(g.at_m[0])}, ${len(g.at_m[1])}, ${len(g.at_m[2])}`]);
+  const couples = groups.filter((g) => Math.hypot(...g.force_N) === 0).map((g) => g.source);
+  rows.push(['Sum of the applied loads', f(sum[0]), f(sum[1]), f(sum[2]), '']);
+  rows.push(['Base reaction (on the structure)', f(reaction[0]!), f(reaction[1]!), f(reaction[2]!), '0, 0, 0']);
+  return {
+    kind: 'table',
+    title: `Applied loads of ${combo.id}, factored, and the base reaction`,
+    header: ['Load source', 'Fx', 'Fy', 'Fz', 'Drawn at x, y, z'],
+    widths: ['*', 52, 52, 52, 110],
+    rows,
+    note:
+      'Global axes. Each source is the sum of its factored loads; it is drawn at the centroid of its parts, and the moment of its parts about that point (from attachment offsets) acts with it in the analysis.' +
+      (couples.length > 0 ? ` Couples without force (${couples.length === 1 ? 'one source' : `${couples.length} sources`}, such as the offset moments of the attachments) are applied as well and are not drawn.` : '') +
+      ' The sum of the applied loads and the reaction balance (statics check in section "Analysis results").',
+  };
+}
