@@ -96,7 +96,8 @@ function shapeBlocks(design: Design, analysis: DesignAnalysis, d: Display): Bloc
     for (const s of r.members[m.id].stations) maxU = Math.max(maxU, Math.hypot(s.ux_m, s.uy_m, s.uz_m));
     size = Math.max(size, m.length_m);
   }
-  const mag = magnificationFor(maxU, 0.1 * size);
+  // The largest displacement drawn at about a seventh of the structure's size: visible, still a sketch.
+  const mag = magnificationFor(maxU, 0.15 * size);
   const lines: ShapeLine[] = [];
   for (const m of members) {
     const st = r.members[m.id].stations;
@@ -143,11 +144,27 @@ function shapeBlocks(design: Design, analysis: DesignAnalysis, d: Display): Bloc
     mag > 1
       ? `Displacements magnified ${mag} times; the largest displacement is ${d.q(maxU, 'section')}.`
       : `Displacements not magnified (magnification 1): the largest displacement, ${d.q(maxU, 'section')}, shows at the scale of the structure.`;
+  // The view in which the largest movement lies comes first: the plan when the tips sway out of
+  // the elevation's plane more than they move in it.
+  const normal: Vec3 = [-Math.sin(phi), Math.cos(phi), 0];
+  let outOf = 0;
+  let inPlane = 0;
+  for (const { node } of tips) {
+    const u = r.displacements[node];
+    const n = Math.abs(u[0] * normal[0] + u[1] * normal[1]);
+    outOf = Math.max(outOf, n);
+    inPlane = Math.max(inPlane, Math.sqrt(Math.max(0, Math.hypot(u[0], u[1], u[2]) ** 2 - n * n)));
+  }
+  const planFirst = outOf > inPlane;
+  const elevationFigure: Block = { kind: 'figure', title: `Deflected shape in elevation, ${r.combination}`, svg: elevation.svg, width_pt: elevation.width, caption: `${magText} Undeformed axes dashed.` };
+  const planFigure: Block = { kind: 'figure', title: `Deflected shape in plan, ${r.combination}`, svg: plan.svg, width_pt: plan.width, caption: `${magText} Undeformed axes dashed.` };
+  const viewText = planFirst
+    ? 'The largest movement of the tips is out of the plane of the elevation (sideways): the plan, first, shows it.'
+    : 'The largest movement of the tips lies in the plane of the elevation, shown first; the plan shows the sideways part.';
   return [
     { kind: 'heading', level: 2, text: 'Deflected shape' },
-    { kind: 'paragraph', text: `The deflected shape is drawn for ${which}. ${magText}` },
-    { kind: 'figure', title: `Deflected shape in elevation, ${r.combination}`, svg: elevation.svg, width_pt: elevation.width, caption: `${magText} Undeformed axes dashed.` },
-    { kind: 'figure', title: `Deflected shape in plan, ${r.combination}`, svg: plan.svg, width_pt: plan.width, caption: `${magText} Undeformed axes dashed.` },
+    { kind: 'paragraph', text: `The deflected shape is drawn for ${which}. ${magText} ${viewText}` },
+    ...(planFirst ? [planFigure, elevationFigure] : [elevationFigure, planFigure]),
     table,
   ];
 }
