@@ -21,6 +21,7 @@ import { fmtTiming, summarise, type Timing } from './timing.ts';
 import { printCalculixComparison } from './calculix-compare.ts';
 import { printRefusalTiming } from './refusal-timing.ts';
 import { printCompareAndBatchBench } from './compare-batch.ts';
+import { printColdBuilds } from './cold-build.ts';
 
 const RUNS = 41;
 const WARMUP = 5;
@@ -156,3 +157,4 @@ printRefusalTiming();
 await printCalculixComparison();
 
 await printCompareAndBatchBench();
+printColdBuilds();
