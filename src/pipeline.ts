@@ -16,6 +16,7 @@ import type { CheckResults } from './checks/check-types.ts';
 import { checkSummaryLines } from './checks/check-summary.ts';
 import { checkSections, CHECKS_TITLE } from './report/sections/check-sections.ts';
 import { summarySection } from './report/sections/summary-section.ts';
+import { memberCharts } from './report/sections/member-charts.ts';
 import { RESULTS_TITLE } from './report/sections/results-section.ts';
 import { assertPrintable } from './printable-input.ts';
 import { issuedRegisterUpdate, type RegisterUpdate } from './output/issued-register.ts';
@@ -81,7 +82,9 @@ export async function packageOf(loaded: LoadedDesign, opts: BuildOptions = {}, c
   const { analysis, checks } = checked;
   const issuedRegister = issuedRegisterUpdate(loaded);
   const summaryPage = summarySection(loaded, analysis, checks, { checks: CHECKS_TITLE, results: RESULTS_TITLE });
-  const document = buildDocument(loaded, { sections: analysisSections(loaded, analysis, checkSections(loaded, analysis, checks), checks), secondOrder: analysis.options.secondOrder, checks, summary: summaryPage });
+  // vega renders asynchronously: the member charts are made before the (synchronous) document.
+  const charts = await memberCharts(loaded, analysis, checks);
+  const document = buildDocument(loaded, { sections: analysisSections(loaded, analysis, checkSections(loaded, analysis, checks), checks, charts), secondOrder: analysis.options.secondOrder, checks, summary: summaryPage });
   const pdf = await renderPdf(document);
   const json = opts.json
     ? resultsJson({ loaded, toolVersion: toolVersion(), ...analysis, secondOrder: analysis.options.secondOrder, checks })

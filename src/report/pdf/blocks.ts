@@ -160,7 +160,7 @@ function tableContent(block: Extract<Block, { kind: 'table' }>, counter: Section
   const widths = block.widths ? [...block.widths] : Array.from({ length: n }, () => '*' as const);
   const table: Content = {
     margin: [0, 4, 0, block.note ? 2 : 10],
-    table: { headerRows: 2, keepWithHeaderRows: 1, dontBreakRows: true, widths, body: [titleRow, headerRow, ...body] },
+    table: { headerRows: 2, keepWithHeaderRows: Math.min(3, body.length), dontBreakRows: true, widths, body: [titleRow, headerRow, ...body] },
     layout: ruledLayout(1, 1),
   } as Content;
   if (!block.note) return table;

@@ -14,9 +14,10 @@ import { resultsSection, staticsTablesSection } from './results-section.ts';
 import { structuralModelSection } from './structural-model-section.ts';
 import { freeBodySection } from './free-body-section.ts';
 import type { CheckResults } from '../../checks/check-types.ts';
+import type { MemberChart } from './member-charts.ts';
 
 /** With the checks, the free-body diagrams of the combinations that govern them follow the results. */
-export function analysisSections(loaded: LoadedDesign, analysis: DesignAnalysis, checkSections: readonly DocSection[] = [], checks: CheckResults | null = null): DocSection[] {
+export function analysisSections(loaded: LoadedDesign, analysis: DesignAnalysis, checkSections: readonly DocSection[] = [], checks: CheckResults | null = null, charts: readonly MemberChart[] | null = null): DocSection[] {
   const loads = loadCasesSections(loaded, analysis);
   return [
     structuralModelSection(loaded, analysis),
@@ -25,7 +26,7 @@ export function analysisSections(loaded: LoadedDesign, analysis: DesignAnalysis,
     combinationsSection(loaded, analysis),
     resultsSection(loaded, analysis),
     ...(checks ? [freeBodySection(loaded, analysis, checks)] : []),
-    diagramsSection(loaded, analysis),
+    diagramsSection(loaded, analysis, charts),
     ...checkSections,
     handCheckSection(loaded, analysis),
     loads.steps,

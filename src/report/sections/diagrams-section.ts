@@ -17,6 +17,7 @@ import { mainArm } from './elevation-plan-section.ts';
 import { tipNode } from './results-section.ts';
 import { templateBlocks } from './templates.ts';
 import { withoutRoundOff } from './round-off.ts';
+import type { MemberChart } from './member-charts.ts';
 
 export const DIAGRAMS_TITLE = 'Internal force and deflection diagrams';
 
@@ -169,14 +170,18 @@ function shapeBlocks(design: Design, analysis: DesignAnalysis, d: Display): Bloc
   ];
 }
 
-export function diagramsSection(loaded: LoadedDesign, analysis: DesignAnalysis): DocSection {
+/** With `charts` (vega-lite, rendered by the pipeline) each member gets its chart of every force
+ * component, the check ratio and the displacements; without, the resultant plots drawn here. */
+export function diagramsSection(loaded: LoadedDesign, analysis: DesignAnalysis, charts: readonly MemberChart[] | null = null): DocSection {
   const { design } = loaded;
   const d = display(design.units);
   const blocks: Block[] = [...templateBlocks('diagrams', {}).blocks];
   for (const m of analysis.model.members) {
     const gov = envelope(analysis.results, m.id, 'Mres').max.combination;
     blocks.push({ kind: 'heading', level: 2, text: `${m.kind === 'pole' ? 'Pole' : `Arm ${m.id}`}` });
-    blocks.push(memberPlot(m.id, m.kind, analysis.results[gov], m.length_m, design.units, d));
+    const mine = (charts ?? []).filter((c) => c.member === m.id);
+    if (mine.length > 0) for (const c of mine) blocks.push({ kind: 'figure', title: c.title, svg: c.svg, width_pt: c.width_pt, caption: c.caption });
+    else blocks.push(memberPlot(m.id, m.kind, analysis.results[gov], m.length_m, design.units, d));
   }
   blocks.push(...shapeBlocks(design, analysis, d));
   return { id: 'diagrams', title: DIAGRAMS_TITLE, blocks };
