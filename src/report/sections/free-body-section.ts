@@ -7,6 +7,7 @@ import type { CheckResults } from '../../checks/check-types.ts';
 import { CHECK_TITLES, verdictByType } from '../../checks/verdict.ts';
 import type { LoadedDesign } from '../../design/design.ts';
 import { combinedLoads } from '../../analysis/analyze.ts';
+import { jointFreeBody } from '../../analysis/joint-forces.ts';
 import { loadGroups, type LoadGroup } from '../../loads/load-groups.ts';
 import type { Combination, LoadCase } from '../../loads/load-types.ts';
 import type { Vec3 } from '../../model/frame.ts';
@@ -15,7 +16,7 @@ import { freeBodyDiagram, type FreeBodyOptions } from '../figures/free-body.ts';
 import { display, type Display } from './display.ts';
 import { buildScene, mainArm } from './elevation-plan-section.ts';
 import { wholeId } from './check-text.ts';
-import { withoutRoundOff } from './round-off.ts';
+import { ROUND_OFF, withoutRoundOff } from './round-off.ts';
 import { templateBlocks } from './templates.ts';
 
 export const FREE_BODY_TITLE = 'Free-body diagrams';
@@ -65,6 +66,7 @@ export function freeBodySection(loaded: LoadedDesign, analysis: DesignAnalysis, 
     const horizontalLoad = groups.some((g) => Math.hypot(g.force_N[0], g.force_N[1]) > 1e-6 * Math.hypot(...g.force_N));
     if (horizontalLoad) blocks.push({ kind: 'figure', title: `Free body, ${combo.id}, plan`, svg: plan.svg, width_pt: plan.width, caption: 'Looking down, X to the right. Horizontal components of the same loads and of the base reactions (vertical components are in the elevation). To scale.' });
     blocks.push(loadTable(combo, groups, r.force, d));
+    for (const arm of design.arms) blocks.push(jointTable(analysis, combo, arm.id, d));
   }
   blocks.push({ kind: 'heading', level: 2, text: 'Load diagrams of the load cases' });
   blocks.push({ kind: 'paragraph', text: 'Each load case as applied, unfactored, on the elevation; the loads in numbers are in section "Loads" (sums) and in the appendix of load calculation steps.' });
@@ -94,6 +96,28 @@ function shortNamer(ids: readonly string[]): (source: string) => string {
     if (ids.includes(last) && !/\b(pole|arm)\b/.test(source.slice(0, -last.length))) return last;
     const s = source.replace(/^self-weight of (the )?/, 'weight, ').replace(/^(wind|natural gust|truck gust|galloping) on (the )?/, '$1, ');
     return s.length > 28 ? `${s.slice(0, 26)}…` : s;
+  };
+}
+
+/** The free body of the joint where an arm meets the pole: every member end's force and moment on the joint node, and their sum. */
+function jointTable(analysis: DesignAnalysis, combo: Combination, arm: string, d: Display): Block {
+  const j = jointFreeBody(analysis.model, analysis.results[combo.id]!, arm, combinedLoads(analysis.cases, combo));
+  const bigF = Math.max(...j.parts.map((p) => Math.hypot(...p.force_N)));
+  const bigM = Math.max(...j.parts.map((p) => Math.hypot(...p.moment_Nm)));
+  // Noise of the solution prints as 0: below 1e-9 of the largest part, or in second order below the
+  // P-delta tolerance of it (the iteration stops there).
+  const tol = Math.max(ROUND_OFF, analysis.options.secondOrder ? analysis.options.tolerance : 0);
+  const f = (v: number) => d.q(Math.abs(v) <= tol * bigF ? 0 : v, 'force');
+  const m = (v: number) => d.q(Math.abs(v) <= tol * bigM ? 0 : v, 'moment');
+  const rows = j.parts.map((p) => [p.what, f(p.force_N[0]), f(p.force_N[1]), f(p.force_N[2]), m(p.moment_Nm[0]), m(p.moment_Nm[1]), m(p.moment_Nm[2])]);
+  rows.push(['Sum (equilibrium of the joint)', f(j.sumForce_N[0]), f(j.sumForce_N[1]), f(j.sumForce_N[2]), m(j.sumMoment_Nm[0]), m(j.sumMoment_Nm[1]), m(j.sumMoment_Nm[2])]);
+  return {
+    kind: 'table',
+    title: `Free body of the joint of arm ${arm} and the pole, ${combo.id}`,
+    header: ['On the joint', 'Fx', 'Fy', 'Fz', 'Mx', 'My', 'Mz'],
+    widths: ['*', 46, 46, 46, 54, 54, 54],
+    rows,
+    note: `Global axes; forces and moments that each member end exerts on the joint node (node ${j.node}), moments about the node: the arm's end at the pole face is carried to the node through its rigid offset. They balance: the last row is round-off. Values below ${tol === ROUND_OFF ? '1e-9' : `the P-delta tolerance (${tol})`} of the largest print as 0.`,
   };
 }
 
