@@ -1,22 +1,6 @@
-// The text of a PDF in content order (`pdftotext -raw`, poppler-utils): table cells come out
-// one after the other, row by row, which lets a test read the cells of one row even when the
-// layout wrapped them over several lines.
-import { execFileSync } from 'node:child_process';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-
-export function rawPdfText(pdf: Uint8Array): string {
-  const dir = mkdtempSync(join(tmpdir(), 'polebook-raw-'));
-  try {
-    const file = join(dir, 'package.pdf');
-    writeFileSync(file, pdf);
-    return execFileSync('pdftotext', ['-raw', '-enc', 'UTF-8', file, '-'], { encoding: 'utf8' });
-  } finally {
-    rmSync(dir, { recursive: true, force: true });
-  }
-}
-
+// The numbers of one table row, read from a package's text in content order (pdfjs gives table
+// cells one after the other, row by row), which lets a test read the cells of one row even when
+// the layout wrapped them over several lines. Pass the raw page texts joined by form feeds.
 /**
  * The numbers printed in one row of a titled table: the text from the row's id to the next
  * row's id (a line broken after a hyphen is joined again, page headers and footers left out),
