@@ -35,8 +35,8 @@ export function deadLoadCase(design: Design, model: FrameModel): LoadCase {
     const Ar = sectionAt(ax.section, ax.length_m, 0).A_m2;
     const At = sectionAt(ax.section, ax.length_m, ax.length_m).A_m2;
     const src = `${RULES.selfWeight}; ${STANDARD_GRAVITY_SOURCE}`;
-    steps.add({ description: `Self-weight per length of the ${memberName(ax.id)} at its root`, symbol: 'w_root', formula: 'w = ρ g A', substituted: [qty(rho, 'density'), ' × g × ', qty(Ar, 'sectionArea')], result: qty(rho * g * Ar, 'lineLoad'), source: src });
-    steps.add({ description: `Self-weight per length of the ${memberName(ax.id)} at its tip`, symbol: 'w_tip', formula: 'w = ρ g A', substituted: [qty(rho, 'density'), ' × g × ', qty(At, 'sectionArea')], result: qty(rho * g * At, 'lineLoad'), source: src });
+    steps.add({ description: `Self-weight per length of the ${memberName(ax.id)} at its root`, symbol: 'w_root', formula: 'w = γ A, γ = ρ g', substituted: [qty(rho * g, 'unitWeight'), ' × ', qty(Ar, 'sectionArea')], result: qty(rho * g * Ar, 'lineLoad'), source: src });
+    steps.add({ description: `Self-weight per length of the ${memberName(ax.id)} at its tip`, symbol: 'w_tip', formula: 'w = γ A, γ = ρ g', substituted: [qty(rho * g, 'unitWeight'), ' × ', qty(At, 'sectionArea')], result: qty(rho * g * At, 'lineLoad'), source: src });
     steps.add({
       description: `Self-weight of the ${memberName(ax.id)} (area linear along the taper)`,
       symbol: `W_${ax.id}`,

@@ -1,6 +1,7 @@
 // Section "Design checks": the verdict by check type, the governing check of each type and
 // member worked in full, and for each member and combination the station that governs.
 // Reads the check records; computes no engineering.
+import { formatRatio } from '../../units/units.ts';
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { CheckRecord, CheckResults } from '../../checks/check-types.ts';
 import { CHECK_TITLES, verdictByType } from '../../checks/verdict.ts';
@@ -19,11 +20,7 @@ export function checkSections(loaded: LoadedDesign, analysis: DesignAnalysis, ch
   const { design } = loaded;
   const d = display(design.units);
   const blocks: Block[] = [
-    ...templateBlocks('checks', {
-      analysisOrder: analysis.options.secondOrder
-        ? 'The demands come from the second-order (P-delta) analysis of each combination.'
-        : 'The demands come from a first-order analysis (--first-order or analysis.secondOrder: false): second-order effects are not in them.',
-    }).blocks,
+    ...templateBlocks('checks', { secondOrder: analysis.options.secondOrder }).blocks,
   ];
   const verdict = verdictByType(checks.records);
   blocks.push({
@@ -71,7 +68,7 @@ function outsideMethodBlocks(analysis: DesignAnalysis): Block[] {
   ];
 }
 
-const ratioText = (r: CheckRecord): string => (Number.isFinite(r.ratio) ? r.ratio.toFixed(3) : 'not made');
+const ratioText = (r: CheckRecord): string => (Number.isFinite(r.ratio) ? formatRatio(r.ratio) : 'not made');
 
 function placeText(r: CheckRecord, d: Display): string {
   const who = memberText(r.member);

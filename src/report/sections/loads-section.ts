@@ -49,10 +49,7 @@ export function loadsSection(loaded: LoadedDesign): DocSection {
   const d = display(design.units);
   const w = design.wind;
   const typed = [w.membersPressure_Pa, w.panelsPressure_Pa, w.pointsPressure_Pa].every((p) => p !== null);
-  const pressureBasis = w.speed === null || typed
-    ? 'The design wind pressures are those given in the input, which already include the coefficients the user chose; the program does not change them.'
-    : 'Where a pressure is given in the input it is used as given; the others are computed from the wind speed below, P = 0.00256 Kz Kd G V² Cd at each height, every coefficient worked in the wind load cases.';
-  const blocks: Block[] = [...templateBlocks('loads', { pressureBasis }).blocks];
+  const blocks: Block[] = [...templateBlocks('loads', { pressuresAsGiven: w.speed === null || typed }).blocks];
   const pressureText = (p: number | null): string => (p === null ? 'from the wind speed, by height (below)' : `${d.q(p, 'pressure')} (input)`);
 
   blocks.push({

@@ -8,7 +8,7 @@ import { envelope, extremeExtent, resultsOf } from '../../analysis/envelope.ts';
 import type { LoadedDesign } from '../../design/design.ts';
 import type { Combination } from '../../loads/load-types.ts';
 import type { FrameModel, Vec3 } from '../../model/frame.ts';
-import { formatNumber } from '../../units/units.ts';
+import { formatNumber, formatPercent, formatTolerance } from '../../units/units.ts';
 import type { Block, DocSection } from '../document.ts';
 import { isFactored } from '../../design/combination-use.ts';
 import { display, fractionText, memberText, type Display } from './display.ts';
@@ -56,8 +56,8 @@ function summaryBlocks(analysis: DesignAnalysis, d: Display): Block[] {
         return [
           c.id,
           `${r.iterations}`,
-          r.secondOrder ? r.convergence.change.toExponential(1) : '–',
-          r.secondOrder ? r.convergence.residual.toExponential(1) : '–',
+          r.secondOrder ? formatTolerance(r.convergence.change) : '–',
+          r.secondOrder ? formatTolerance(r.convergence.residual) : '–',
           b ? d.q(b.firstOrder_Nm, 'moment') : '–',
           b ? d.q(b.final_Nm, 'moment') : '–',
           b && b.amplification !== null ? formatNumber(b.amplification, 4) : '–',
@@ -164,14 +164,11 @@ const componentLines = (xyz: readonly string[]): string => xyz.map((v, k) => `${
 
 function staticsBlocks(analysis: DesignAnalysis, d: Display): Block[] {
   const deformed = analysis.options.secondOrder;
-  const configurationText = deformed
-    ? 'In this second-order analysis the check is made in the deformed configuration: loads and supports at their displaced positions, so it also shows how closely the second-order equilibrium is met.'
-    : 'In this first-order analysis the check is made on the undeformed structure.';
   const rows = analysis.combinations.map((c) => resultOf(analysis, c));
-  const share = (v: number | null) => (v === null ? '–' : `${formatNumber(v * 100, 3)} %`);
+  const share = (v: number | null) => (v === null ? '–' : formatPercent(v));
   const blocks: Block[] = [
     { kind: 'heading', level: 2, text: 'Statics check' },
-    ...templateBlocks('statics-check', { configurationText }).blocks,
+    ...templateBlocks('statics-check', { deformed }).blocks,
     {
       kind: 'table',
       title: 'Statics check: forces',
@@ -182,7 +179,7 @@ function staticsBlocks(analysis: DesignAnalysis, d: Display): Block[] {
         componentLines(vecText(r.statics.appliedForce_N, 'force', d)),
         componentLines(vecText(r.statics.reactionForce_N, 'force', d)),
         d.q(Math.hypot(...r.statics.residualForce_N), 'force'),
-        r.statics.relativeForceResidual.toExponential(1),
+        formatTolerance(r.statics.relativeForceResidual),
       ]),
       note: `Configuration of the check: ${deformed ? 'deformed' : 'undeformed'}. Relative: |residual force| / Σ|applied forces| (dimensionless).`,
     },
@@ -196,7 +193,7 @@ function staticsBlocks(analysis: DesignAnalysis, d: Display): Block[] {
         componentLines(vecText(r.statics.appliedMoment_Nm, 'moment', d)),
         componentLines(vecText(r.statics.reactionMoment_Nm, 'moment', d)),
         d.q(Math.hypot(...r.statics.residualMoment_Nm), 'moment'),
-        r.statics.relativeMomentResidual.toExponential(1),
+        formatTolerance(r.statics.relativeMomentResidual),
         ...(deformed ? [share(r.statics.momentResidualShare)] : []),
       ]),
       note:
@@ -212,33 +209,37 @@ function staticsBlocks(analysis: DesignAnalysis, d: Display): Block[] {
       kind: 'caution',
       title: 'Force balance not met',
       text:
-        `Under combination ${wf.combination} the reactions do not balance the applied forces: relative force residual ${wf.statics.relativeForceResidual.toExponential(2)}, ` +
+        `Under combination ${wf.combination} the reactions do not balance the applied forces: relative force residual ${formatTolerance(wf.statics.relativeForceResidual)}, ` +
         `residual (${vecText(wf.statics.residualForce_N, 'force', d).join(', ')}). The sum of forces balances to round-off in a correct analysis in either configuration; do not use these results before the cause is found.`,
     });
   }
   if (wm.statics.relativeMomentResidual > TINY_RESIDUAL && wm.statics.configuration === 'deformed') {
-    const t = templateBlocks('statics-deformed', {
-      forceResidual: wf.statics.relativeForceResidual.toExponential(2),
-      forceCombination: wf.combination,
-      momentResidual: d.q(Math.hypot(...wm.statics.residualMoment_Nm), 'moment'),
-      momentCombination: wm.combination,
-      momentRelative: wm.statics.relativeMomentResidual.toExponential(2),
-      momentShare: share(wm.statics.momentResidualShare),
-      displacementMoment: d.q(wm.statics.displacementMoment_Nm, 'moment'),
-    });
+    const t = templateBlocks(
+      'statics-deformed',
+      {
+        forceResidual: wf.statics.relativeForceResidual,
+        forceCombination: wf.combination,
+        momentResidual: Math.hypot(...wm.statics.residualMoment_Nm),
+        momentCombination: wm.combination,
+        momentRelative: wm.statics.relativeMomentResidual,
+        momentShare: share(wm.statics.momentResidualShare),
+        displacementMoment: wm.statics.displacementMoment_Nm,
+      },
+      { units: d.units },
+    );
     blocks.push({ kind: 'caution', title: 'Statics residual in the deformed configuration', text: t.blocks.map((b) => (b.kind === 'paragraph' ? b.text : '')).join('\n\n') });
   } else if (wm.statics.relativeMomentResidual > TINY_RESIDUAL) {
     blocks.push({
       kind: 'caution',
       title: 'Moment balance not met',
       text:
-        `Under combination ${wm.combination} the relative moment residual is ${wm.statics.relativeMomentResidual.toExponential(2)} on the undeformed structure, ` +
+        `Under combination ${wm.combination} the relative moment residual is ${formatTolerance(wm.statics.relativeMomentResidual)} on the undeformed structure, ` +
         `residual moment (${vecText(wm.statics.residualMoment_Nm, 'moment', d).join(', ')}). A first-order analysis balances to round-off: do not use these results before the cause is found.`,
     });
   } else {
     blocks.push({
       kind: 'paragraph',
-      text: `Equilibrium is met to round-off: the largest relative force residual is ${wf.statics.relativeForceResidual.toExponential(2)} (${wf.combination}) and the largest relative moment residual ${wm.statics.relativeMomentResidual.toExponential(2)} (${wm.combination}), ${wm.statics.configuration} configuration.`,
+      text: `Equilibrium is met to round-off: the largest relative force residual is ${formatTolerance(wf.statics.relativeForceResidual)} (${wf.combination}) and the largest relative moment residual ${formatTolerance(wm.statics.relativeMomentResidual)} (${wm.combination}), ${wm.statics.configuration} configuration.`,
     });
   }
   return blocks;
@@ -286,8 +287,8 @@ function envelopeBlocks(analysis: DesignAnalysis, d: Display): Block[] {
       rows,
       note:
         'Member axes and signs as in the section "Structural model" (N > 0 tension). Extremes are exact along each element. ' +
-        `Where the value holds over a length (within ${CONSTANT_SHARE} of the member's largest value of its kind), the place is that length. ` +
-        `A value within ${ROUND_OFF} of the member's largest force or moment is round-off and printed as 0, with no combination named.`,
+        `Where the value holds over a length (within ${formatTolerance(CONSTANT_SHARE)} of the member's largest value of its kind), the place is that length. ` +
+        `A value within ${formatTolerance(ROUND_OFF)} of the member's largest force or moment is round-off and printed as 0, with no combination named.`,
     },
   ];
 }
@@ -332,7 +333,7 @@ function foundationBlocks(analysis: DesignAnalysis, d: Display): Block[] {
 }
 
 function modeBlocks(analysis: DesignAnalysis, d: Display): Block[] {
-  const pct = (v: number) => `${formatNumber(withoutRoundOff(v, 1) * 100, 3)} %`;
+  const pct = (v: number) => formatPercent(withoutRoundOff(v, 1));
   const total = (k: 0 | 1 | 2) => analysis.modes.reduce((s, m) => s + m.effectiveMassRatio[k], 0);
   const sum: Vec3 = [total(0), total(1), total(2)];
   return [
@@ -347,7 +348,7 @@ function modeBlocks(analysis: DesignAnalysis, d: Display): Block[] {
         ...analysis.modes.map((m) => [`${m.mode}`, d.q(m.frequency_Hz, 'frequency'), `${formatNumber(m.period_s)} s`, pct(m.effectiveMassRatio[0]), pct(m.effectiveMassRatio[1]), pct(m.effectiveMassRatio[2])]),
         ['Sum', '', '', pct(sum[0]), pct(sum[1]), pct(sum[2])],
       ],
-      note: `Effective mass ratio: effective modal mass in the global direction as a share of the total moving mass; below ${ROUND_OFF} (round-off) it prints as 0.`,
+      note: `Effective mass ratio: effective modal mass in the global direction as a share of the total moving mass; below ${formatTolerance(ROUND_OFF)} (round-off) it prints as 0.`,
     },
   ];
 }
