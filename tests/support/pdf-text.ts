@@ -23,7 +23,12 @@ export interface OutlineEntry {
 
 export interface PdfText {
   readonly pageCount: number;
-  /** Each page as lines top to bottom, words left to right; a wide gap prints as three spaces. */
+  /**
+   * Each page as lines top to bottom, words left to right; a wide gap prints as three spaces. Read
+   * as a reader sees it: a no-break space as a space, a non-breaking hyphen (U+2011, in printed ids)
+   * as '-', a zero-width space (a break opportunity in an id) as nothing; `words` keep the
+   * characters as drawn.
+   */
   readonly pages: readonly string[];
   /** Each page's text in content-stream order (table cells row by row), runs joined by line breaks where pdfjs ends a line. */
   readonly raw: readonly string[];
@@ -63,12 +68,12 @@ export async function readPdfText(pdf: Uint8Array): Promise<PdfText> {
       const [x0, y0, x1, y1] = page.view;
       sizes.push([x1 - x0, y1 - y0]);
       const items = ((await page.getTextContent()).items as unknown[]).filter((i): i is RawItem => typeof i === 'object' && i !== null && 'str' in i);
-      raw.push(items.map((i) => i.str + (i.hasEOL ? '\n' : '')).join(''));
+      raw.push(asRead(items.map((i) => i.str + (i.hasEOL ? '\n' : '')).join('')));
       const w = items
         .filter((i) => i.str.trim() !== '')
         .map((i) => ({ str: i.str, x: i.transform[4], y: i.transform[5], width: i.width, size: Math.abs(i.transform[3]) || Math.abs(i.transform[0]) }));
       words.push(w);
-      pages.push(layoutLines(w).join('\n'));
+      pages.push(asRead(layoutLines(w).join('\n')));
       page.cleanup();
     }
     const meta = await doc.getMetadata();
@@ -76,6 +81,11 @@ export async function readPdfText(pdf: Uint8Array): Promise<PdfText> {
   } finally {
     await doc.destroy();
   }
+}
+
+/** A no-break space reads as a space, a non-breaking hyphen as a hyphen. */
+export function asRead(text: string): string {
+  return text.replace(/\u00a0/g, ' ').replace(/\u2011/g, '-').replace(/\u200b/g, '');
 }
 
 /** Words on (about) the same baseline form a line; lines run top to bottom. */

@@ -3,6 +3,7 @@
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { LoadedDesign } from '../../design/design.ts';
 import type { DocSection } from '../document.ts';
+import { printedIds, withUnbrokenIds } from '../format/unbroken-ids.ts';
 import { combinationsSection } from './combinations-section.ts';
 import { diagramsSection } from './diagrams-section.ts';
 import { elevationPlanSection } from './elevation-plan-section.ts';
@@ -12,7 +13,7 @@ import { resultsSection } from './results-section.ts';
 import { structuralModelSection } from './structural-model-section.ts';
 
 export function analysisSections(loaded: LoadedDesign, analysis: DesignAnalysis): DocSection[] {
-  return [
+  const sections = [
     structuralModelSection(loaded, analysis),
     elevationPlanSection(loaded, analysis),
     loadCasesSection(loaded, analysis),
@@ -21,4 +22,5 @@ export function analysisSections(loaded: LoadedDesign, analysis: DesignAnalysis)
     handCheckSection(loaded, analysis),
     diagramsSection(loaded, analysis),
   ];
+  return withUnbrokenIds(sections, printedIds(analysis));
 }

@@ -2,6 +2,7 @@
 // member worked in full, and for each member and combination the station that governs.
 // Reads the check records; computes no engineering.
 import { formatRatio } from '../../units/units.ts';
+import { printedIds, withUnbrokenIds } from '../format/unbroken-ids.ts';
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { CheckRecord, CheckResults } from '../../checks/check-types.ts';
 import { CHECK_TITLES, verdictByType } from '../../checks/verdict.ts';
@@ -50,7 +51,7 @@ export function checkSections(loaded: LoadedDesign, analysis: DesignAnalysis, ch
       });
     }
   }
-  return [{ id: 'checks', title: CHECKS_TITLE, blocks }];
+  return withUnbrokenIds([{ id: 'checks', title: CHECKS_TITLE, blocks }], printedIds(analysis));
 }
 
 /** The checks rest on the analysis: say so when some of its results are outside the small-displacement method. */

@@ -3,6 +3,7 @@
 import type { FatigueInput, LoadedDesign, LoadKind } from '../../design/design.ts';
 import { CATEGORY_TEXT } from './combination-labels.ts';
 import { formatNumber } from '../../units/units.ts';
+import { withUnbrokenIds } from '../format/unbroken-ids.ts';
 import type { Block, DocSection } from '../document.ts';
 import { display, type Display } from './display.ts';
 import { templateBlocks } from './templates.ts';
@@ -141,5 +142,5 @@ export function loadsSection(loaded: LoadedDesign): DocSection {
     note: 'Load factors are dimensionless; "–" means the load does not enter the combination. Combinations are analysed as combined loads, each as its own analysis.',
   });
 
-  return { id: 'loads', title: LOADS_TITLE, blocks };
+  return withUnbrokenIds([{ id: 'loads', title: LOADS_TITLE, blocks }], design.combinations.map((c) => c.id))[0]!;
 }

@@ -15,7 +15,7 @@ import { display, fractionText, memberText, type Display } from './display.ts';
 import { largeMovements, SMALL_DISPLACEMENT_LIMIT, worstPerMember } from '../../analysis/displacement-range.ts';
 import { templateBlocks } from './templates.ts';
 import { vecText } from './vector-text.ts';
-import { ROUND_OFF, withoutRoundOff } from './round-off.ts';
+import { ROUND_OFF, roundOffShare, withoutRoundOff } from './round-off.ts';
 
 export const RESULTS_TITLE = 'Analysis results';
 
@@ -166,6 +166,12 @@ function staticsBlocks(analysis: DesignAnalysis, d: Display): Block[] {
   const deformed = analysis.options.secondOrder;
   const rows = analysis.combinations.map((c) => resultOf(analysis, c));
   const share = (v: number | null) => (v === null ? '–' : formatPercent(v));
+  // Round-off (and, in second order, the iteration's noise) is judged against the whole table:
+  // the largest force, and the largest moment or that force times the height of the structure.
+  const noise = roundOffShare(analysis.options);
+  const height = Math.max(...analysis.model.nodes.map((n) => Math.abs(n.xyz_m[2])));
+  const bigF = Math.max(...rows.flatMap((r) => [...r.statics.appliedForce_N, ...r.statics.reactionForce_N].map(Math.abs)));
+  const bigM = Math.max(bigF * height, ...rows.flatMap((r) => [...r.statics.appliedMoment_Nm, ...r.statics.reactionMoment_Nm].map(Math.abs)));
   const blocks: Block[] = [
     { kind: 'heading', level: 2, text: 'Statics check' },
     ...templateBlocks('statics-check', { deformed }).blocks,
@@ -173,26 +179,28 @@ function staticsBlocks(analysis: DesignAnalysis, d: Display): Block[] {
       kind: 'table',
       title: 'Statics check: forces',
       header: ['Combination', 'Applied ΣFx, ΣFy, ΣFz', 'Reactions ΣFx, ΣFy, ΣFz', '|Residual|', 'Relative'],
-      widths: [110, '*', '*', '*', 44],
+      widths: [110, '*', '*', '*', 58],
       rows: rows.map((r) => [
         r.combination,
-        componentLines(vecText(r.statics.appliedForce_N, 'force', d)),
-        componentLines(vecText(r.statics.reactionForce_N, 'force', d)),
-        d.q(Math.hypot(...r.statics.residualForce_N), 'force'),
+        componentLines(vecText(r.statics.appliedForce_N, 'force', d, bigF, noise)),
+        componentLines(vecText(r.statics.reactionForce_N, 'force', d, bigF, noise)),
+        d.q(withoutRoundOff(Math.hypot(...r.statics.residualForce_N), bigF, noise), 'force'),
         formatTolerance(r.statics.relativeForceResidual),
       ]),
-      note: `Configuration of the check: ${deformed ? 'deformed' : 'undeformed'}. Relative: |residual force| / Σ|applied forces| (dimensionless).`,
+      note:
+        `Configuration of the check: ${deformed ? 'deformed' : 'undeformed'}. Relative: |residual force| / Σ|applied forces| (dimensionless). ` +
+        `A force or moment within ${formatTolerance(noise)} of the largest of its kind in these two tables prints as 0 (${deformed ? 'the P-delta iteration tolerance: below it a value is the iteration\'s noise' : 'round-off'}); the relative residuals are computed from the values before rounding.`,
     },
     {
       kind: 'table',
       title: 'Statics check: moments about the origin',
       header: ['Combination', 'Applied ΣMx, ΣMy, ΣMz', 'Reactions ΣMx, ΣMy, ΣMz', '|Residual|', 'Relative', ...(deformed ? ['Share'] : [])],
-      widths: [110, '*', '*', '*', 44, ...(deformed ? [52] : [])],
+      widths: [110, '*', '*', '*', 58, ...(deformed ? [52] : [])],
       rows: rows.map((r) => [
         r.combination,
-        componentLines(vecText(r.statics.appliedMoment_Nm, 'moment', d)),
-        componentLines(vecText(r.statics.reactionMoment_Nm, 'moment', d)),
-        d.q(Math.hypot(...r.statics.residualMoment_Nm), 'moment'),
+        componentLines(vecText(r.statics.appliedMoment_Nm, 'moment', d, bigM, noise)),
+        componentLines(vecText(r.statics.reactionMoment_Nm, 'moment', d, bigM, noise)),
+        d.q(withoutRoundOff(Math.hypot(...r.statics.residualMoment_Nm), bigM, noise), 'moment'),
         formatTolerance(r.statics.relativeMomentResidual),
         ...(deformed ? [share(r.statics.momentResidualShare)] : []),
       ]),
