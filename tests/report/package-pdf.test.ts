@@ -104,7 +104,7 @@ describe('contents', () => {
 describe('quantities print with their units in the user system', () => {
   it('SI: geometry and loads in m, mm, kPa, MPa', () => {
     const all = si.pages.join('\n');
-    for (const s of ['7.6 m', '406 mm across flats', '300 mm across flats', '7.9 mm', '273 mm', '6 m from arm', '3.6 m × 2.1 m', '0.15 kPa', '1.1 kPa', '1.35 kPa', '0.144 kPa', '200000 MPa', '7850 kg/m³', '560 mm', '724 MPa', '90 deg']) {
+    for (const s of ['7.6 m', '406 mm across flats', '300 mm across flats', '7.9 mm', '273 mm', '6 m from arm', '3.6 m × 2.1 m', '0.15 kPa', '1.1 kPa', '1.35 kPa', '0.144 kPa', '200 × 10³ MPa', '7850 kg/m³', '560 mm', '724 MPa', '90 deg']) {
       expect(all, s).toContain(s);
     }
   });
@@ -113,8 +113,9 @@ describe('quantities print with their units in the user system', () => {
     const all = us.pages.join('\n');
     // NIST SP 811 (2008) App. B: 1 ft = 0.3048 m, 1 in = 0.0254 m, 1 lbf = 4.4482216152605 N.
     // 7.6 m / 0.3048 = 24.934 ft; 406 mm / 25.4 = 15.984 in; 1100 Pa / 47.880259 Pa/psf = 22.974 psf;
-    // 345 MPa / 6.894757 MPa/ksi = 50.038 ksi; 7850 kg/m3 / 16.018463 = 490.06 pcf. Printed to 4 significant digits.
-    for (const s of ['24.93 ft', '15.98 in across flats', '22.97 psf', '50.04 ksi', '490.1 pcf']) {
+    // 345 MPa / 6.894757 MPa/ksi = 50.038 ksi; a density prints in US units as the unit weight it gives:
+    // 7850 kg/m3 × 9.80665 m/s² (standard gravity) / 157.0875 N/m³ per lb/ft³ = 490.06 lb/ft³. Printed to 4 significant digits.
+    for (const s of ['24.93 ft', '15.98 in across flats', '22.97 psf', '50.04 ksi', '490.1 lb/ft³']) {
       expect(all, s).toContain(s);
     }
   });

@@ -21,10 +21,15 @@ export function rowNumbers(raw: string, tableTitle: string, rowId: string, nextI
   if (!number) throw new Error(`table "${tableTitle}" has no number before its title`);
   const after = raw.slice(t0 + tableTitle.length);
   const end = after.search(new RegExp(`\\n\\f?Table (?!${number.replace('.', '\\.')} )`));
-  const region = (end >= 0 ? after.slice(0, end) : after).split(`Table ${number} ${tableTitle}`).join('').replace(/-\n/g, '-');
+  const region = (end >= 0 ? after.slice(0, end) : after).split(`Table ${number} ${tableTitle}`).join('').replace(/([-@])\n/g, '$1');
   const a = region.indexOf(rowId);
   if (a < 0) throw new Error(`no row ${rowId} in table "${tableTitle}"`);
   const b = region.indexOf(nextId, a + rowId.length);
   const segment = region.slice(a + rowId.length, b > a ? b : undefined);
-  return [...segment.matchAll(/-?\d+(?:\.\d+)?(?:e-?\d+)?/g)].map((m) => Number(m[0]));
+  // a number in engineering notation, "23.39 × 10⁶", is one number
+  return [...segment.matchAll(/(-?\d+(?:\.\d+)?)(?: × 10([⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+))?/g)].map((m) => Number(m[1]) * 10 ** superscriptNumber(m[2] ?? '⁰'));
+}
+
+function superscriptNumber(s: string): number {
+  return Number([...s].map((c) => '⁰¹²³⁴⁵⁶⁷⁸⁹'.indexOf(c) >= 0 ? String('⁰¹²³⁴⁵⁶⁷⁸⁹'.indexOf(c)) : c === '⁻' ? '-' : c).join(''));
 }

@@ -3,6 +3,7 @@
 // Reads the check records; computes no engineering.
 import { formatRatio } from '../../units/units.ts';
 import { printedIds, withUnbrokenIds } from '../format/unbroken-ids.ts';
+import { withoutRoundOff } from './round-off.ts';
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { CheckRecord, CheckResults } from '../../checks/check-types.ts';
 import { CHECK_TITLES, verdictByType } from '../../checks/verdict.ts';
@@ -42,12 +43,14 @@ export function checkSections(loaded: LoadedDesign, analysis: DesignAnalysis, ch
     // Anchor bolts and base plate have no station: one record per combination, no station column.
     const stations = rows.some((x) => x.s_m !== null);
     if (rows.length > 1) {
+      // a demand that is round-off next to the largest demand of the table prints as 0
+      const big = Math.max(...rows.map((x) => Math.abs(x.demand.si)));
       blocks.push({
         kind: 'table',
         title: `${CHECK_TITLES[r.type]}, ${memberText(r.member)}: ${stations ? 'governing station of each combination' : 'each combination'}`,
         header: ['Combination', ...(stations ? ['Station'] : []), 'Demand', 'Capacity', 'Ratio', 'Result'],
         widths: ['*', ...(stations ? [60] : []), 70, 70, 40, 40],
-        rows: rows.map((x) => [x.combination ?? '—', ...(stations ? [x.s_m === null ? '—' : d.q(x.s_m, 'length')] : []), d.q(x.demand.si, x.demand.dim), d.q(x.capacity.si, x.capacity.dim), ratioText(x), STATUS_TEXT[x.status]]),
+        rows: rows.map((x) => [x.combination ?? '—', ...(stations ? [x.s_m === null ? '—' : d.q(x.s_m, 'length')] : []), d.q(withoutRoundOff(x.demand.si, big), x.demand.dim), d.q(x.capacity.si, x.capacity.dim), ratioText(x), STATUS_TEXT[x.status]]),
       });
     }
   }
