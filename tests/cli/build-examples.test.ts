@@ -36,7 +36,7 @@ describe.each(EXAMPLES)('polebook build examples/%s', (example) => {
     expect(run.stderr).not.toMatch(/error/i);
     expect(run.status).toBeLessThanOrEqual(1); // 1 would be a failing design check, still a package
     text = await readPdfText(readFileSync(join(out, `${stem}.pdf`)));
-  });
+  }, 120_000);
 
   it('writes the PDF and the JSON results', () => {
     expect(readdirSync(out).sort()).toEqual([`${stem}.pdf`, `${stem}.results.json`]);

@@ -135,14 +135,17 @@ function reactionRows(analysis: DesignAnalysis, list: readonly Combination[], d:
   const bigM = Math.max(bigF * height, ...forces.flatMap((f) => [f[3], f[4], f[5]].map(Math.abs)));
   return list.map((c, k) => {
     const f = forces[k]!;
-    return [c.id, ...vecText([f[0], f[1], f[2]], 'force', d, bigF), ...vecText([f[3], f[4], f[5]], 'moment', d, bigM)];
+    const noise = roundOffShare(analysis.options);
+    return [c.id, ...vecText([f[0], f[1], f[2]], 'force', d, bigF, noise), ...vecText([f[3], f[4], f[5]], 'moment', d, bigM, noise)];
   });
 }
 
 function reactionBlocks(analysis: DesignAnalysis, d: Display): Block[] {
   const header = ['Combination', 'Fx', 'Fy', 'Fz', 'Mx', 'My', 'Mz'];
   const widths = [118, '*', '*', '*', '*', '*', '*'] as const;
-  const note = 'Forces and moments exerted by the support on the structure at the centre of the pole base, global axes. The foundation receives the same values with opposite signs.';
+  const note =
+    'Forces and moments exerted by the support on the structure at the centre of the pole base, global axes. The foundation receives the same values with opposite signs. ' +
+    `A value within ${formatTolerance(roundOffShare(analysis.options))} of the largest force, or of the largest moment or that force times the height, in its table prints as 0.`;
   const groups: { title: string; list: Combination[] }[] = [
     { title: 'Base reactions, factored combinations (strength and extreme)', list: analysis.combinations.filter((c) => isFactored(c.category)) },
     { title: 'Base reactions, service combinations (unfactored)', list: analysis.combinations.filter((c) => c.category === 'service') },
@@ -318,9 +321,16 @@ function foundationBlocks(analysis: DesignAnalysis, d: Display): Block[] {
       return { id: c.id, M: Math.hypot(f[3], f[4]), V: Math.hypot(f[0], f[1]), P: f[2], T: Math.abs(f[5]) };
     });
     const most = (key: 'M' | 'V' | 'P' | 'T', sign = 1) => rows.reduce((a, b) => (sign * b[key] > sign * a[key] ? b : a));
+    // a value that is round-off (or, in second order, the iteration's noise) next to the largest
+    // force or moment of the table prints as 0, with no combination named
+    const height = Math.max(...analysis.model.nodes.map((n) => Math.abs(n.xyz_m[2])));
+    const bigF = Math.max(...rows.flatMap((r) => [r.V, Math.abs(r.P)]));
+    const bigM = Math.max(bigF * height, ...rows.map((r) => r.M));
+    const noise = roundOffShare(analysis.options);
     const line = (label: string, key: 'M' | 'V' | 'P' | 'T', dim: 'moment' | 'force', sign = 1) => {
       const r = most(key, sign);
-      return [label, d.q(r[key], dim), r.id];
+      const v = withoutRoundOff(r[key], dim === 'moment' ? bigM : bigF, noise);
+      return [label, d.q(v, dim), v === 0 ? '—' : r.id];
     };
     blocks.push({
       kind: 'table',
@@ -334,7 +344,7 @@ function foundationBlocks(analysis: DesignAnalysis, d: Display): Block[] {
         line('Smallest vertical reaction Fz (negative: uplift)', 'P', 'force', -1),
         line('Largest torque T = |Mz|', 'T', 'moment'),
       ],
-      note: 'From the reactions at the pole base (by the support on the structure; the foundation receives them with opposite signs). Each value with the combination that gives it; they need not occur together, and the combination rows above give the values that do.',
+      note: `From the reactions at the pole base (by the support on the structure; the foundation receives them with opposite signs). Each value with the combination that gives it; they need not occur together, and the combination rows above give the values that do. A value within ${formatTolerance(noise)} of the largest force or moment of the table prints as 0, with no combination named.`,
     });
   }
   return blocks;
