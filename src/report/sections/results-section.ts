@@ -49,7 +49,7 @@ function summaryBlocks(analysis: DesignAnalysis, d: Display): Block[] {
       kind: 'table',
       title: second ? 'Second-order iteration and base moment amplification' : 'Base moment (first-order analysis)',
       header: ['Combination', 'Solutions', 'Last change', 'Residual', 'Base moment, 1st order', 'Base moment, final', 'Amplification'],
-      widths: [112, 44, 60, 60, '*', '*', 62],
+      widths: [104, 48, 58, 58, '*', '*', 66],
       rows: analysis.combinations.map((c) => {
         const r = resultOf(analysis, c);
         const b = r.baseMoment;
