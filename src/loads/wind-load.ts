@@ -15,7 +15,7 @@ import { iceWindCaseId, windCaseId } from './case-ids.ts';
 import type { AppliedLoad, LoadCase } from './load-types.ts';
 import { RULES } from './load-rules.ts';
 import { memberPressure, memberPressureIsTyped, panelPressure, pointPressure } from './wind-pressure.ts';
-import { loadResultant } from './load-resultant.ts';
+import { loadResultant, sumByOrigin } from './load-resultant.ts';
 
 /** sin θ below this: the member is taken as parallel to the wind (no load). */
 const PARALLEL_SIN = 1e-9;
@@ -119,10 +119,12 @@ export function windLoadCase(design: Design, model: FrameModel, dir: WindDirecti
 
   const R = loadResultant(model, loads).force_N;
   const along = dot(R, wdir);
-  steps.add({ description: 'Total horizontal wind force along the wind direction (sum of the loads of this case)', symbol: 'ΣF_w', formula: 'ΣF_w = Σ F · ŵ', substituted: [qty(along, 'force')], result: qty(along, 'force'), source: 'sum of the loads above' });
+  steps.add({ description: 'Total horizontal wind force along the wind direction (sum of the loads of this case)', symbol: 'ΣF_w', formula: 'ΣF_w = Σ F · ŵ', substituted: sumByOrigin(model, loads, (F) => dot(F, wdir)), result: qty(along, 'force'), source: 'sum of the loads above' });
   const across = Math.hypot(R[0] - along * wdir[0], R[1] - along * wdir[1]);
   if (across > 1e-6 * Math.max(1, Math.abs(along))) {
-    steps.add({ description: 'Total horizontal force across the wind direction (panel faces and members not normal to the wind)', symbol: 'ΣF_⊥', formula: 'ΣF_⊥ = |ΣF − (ΣF · ŵ) ŵ|', substituted: [qty(across, 'force')], result: qty(across, 'force'), source: 'sum of the loads above' });
+    // its addends: each group's component along the across-wind direction of the total
+    const c: Vec3 = [(R[0] - along * wdir[0]) / across, (R[1] - along * wdir[1]) / across, 0];
+    steps.add({ description: 'Total horizontal force across the wind direction (panel faces and members not normal to the wind)', symbol: 'ΣF_⊥', formula: 'ΣF_⊥ = |ΣF − (ΣF · ŵ) ŵ|', substituted: sumByOrigin(model, loads, (F) => dot(F, c)), result: qty(across, 'force'), source: 'sum of the loads above' });
   }
   const id = opts.kind === 'wind' ? windCaseId(dir.angle_rad) : iceWindCaseId(dir.angle_rad);
   const deg = ((dir.angle_rad * 180) / Math.PI).toFixed(1).replace(/\.0$/, '');
