@@ -4,6 +4,7 @@
 // the face at the panel centroid; point attachments: pressure × effective projected area
 // in the wind direction. Offsets put their moments r × F on the members.
 import { qty, StepCollector } from '../calc/step.ts';
+import { formatNumber } from '../units/units.ts';
 import type { Design, WindDirection } from '../design/design.ts';
 import type { FrameModel, Vec3 } from '../model/frame.ts';
 import { elementEnds } from '../model/locate.ts';
@@ -41,9 +42,9 @@ export function windLoadCase(design: Design, model: FrameModel, dir: WindDirecti
   const f = opts.factor;
   if (opts.kind === 'ice-wind') {
     for (const [what, p] of [['members', w.membersPressure_Pa], ['panels', w.panelsPressure_Pa], ['points', w.pointsPressure_Pa]] as const) {
-      if (p !== null) steps.add({ description: `Wind pressure on ${what} with ice`, symbol: `p_${what}`, formula: 'p = f_ice × p', substituted: [String(f), ' × ', qty(p, 'pressure')], result: qty(f * p, 'pressure'), source: RULES.iceWind });
+      if (p !== null) steps.add({ description: `Wind pressure on ${what} with ice`, symbol: `p_${what}`, formula: 'p = f_ice × p', substituted: [formatNumber(f), ' × ', qty(p, 'pressure')], result: qty(f * p, 'pressure'), source: RULES.iceWind });
     }
-    if (w.speed) steps.add({ description: 'Factor on the pressures from the wind speed, with ice', symbol: 'f_ice', formula: 'f_ice', substituted: [String(f)], result: qty(f, 'ratio'), source: RULES.iceWind });
+    if (w.speed) steps.add({ description: 'Factor on the pressures from the wind speed, with ice', symbol: 'f_ice', formula: 'f_ice', substituted: [formatNumber(f)], result: qty(f, 'ratio'), source: RULES.iceWind });
   }
   const tag = opts.kind === 'wind' ? 'wind' : 'wind with ice';
 

@@ -86,9 +86,9 @@ export function loadsSection(loaded: LoadedDesign): DocSection {
       rows: [
         [`Basic wind speed V (${s.basis})`, d.q(s.V_mps, 'speed')],
         ['Exposure category', s.exposure],
-        ['Directionality factor Kd (dimensionless)', String(s.Kd)],
-        ['Gust effect factor G (dimensionless)', String(s.G)],
-        ['Factor Cv on V d in the drag of round tubes (dimensionless)', String(s.Cv)],
+        ['Directionality factor Kd (dimensionless)', formatNumber(s.Kd)],
+        ['Gust effect factor G (dimensionless)', formatNumber(s.G)],
+        ['Factor Cv on V d in the drag of round tubes (dimensionless)', formatNumber(s.Cv)],
       ],
       note: 'Sources of the defaults are in the assumptions table of the criteria section; Kz and the drag coefficients are computed in the wind load cases.',
     });
