@@ -248,10 +248,15 @@ function staticsBlocks(analysis: DesignAnalysis, d: Display): Block[] {
         `residual moment (${vecText(wm.statics.residualMoment_Nm, 'moment', d).join(', ')}). A first-order analysis balances to round-off: do not use these results before the cause is found.`,
     });
   } else {
-    blocks.push({
-      kind: 'paragraph',
-      text: `Equilibrium is met to round-off: the largest relative force residual is ${formatTolerance(wf.statics.relativeForceResidual)} (${wf.combination}) and the largest relative moment residual ${formatTolerance(wm.statics.relativeMomentResidual)} (${wm.combination}), ${wm.statics.configuration} configuration.`,
-    });
+    blocks.push(
+      ...templateBlocks('statics-balanced', {
+        forceResidual: wf.statics.relativeForceResidual,
+        forceCombination: wf.combination,
+        momentResidual: wm.statics.relativeMomentResidual,
+        momentCombination: wm.combination,
+        deformed: wm.statics.configuration === 'deformed',
+      }).blocks,
+    );
   }
   return blocks;
 }
