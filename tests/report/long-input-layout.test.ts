@@ -1,5 +1,5 @@
 // A very long project name and a 75 ft signal arm keep the layout (issue 9, tests without system
-// tools): examples/signal-support.yaml with its name made 180 characters long and its arm SA 75 ft,
+// tools): examples/signal-support.yaml with its name made 168 characters long and its arm SA 75 ft,
 // read back in-process with pdfjs-dist: every page still carries the structure id and "page N of M",
 // no text runs past the 56 pt side margins, and the running header stays one line.
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
