@@ -37,6 +37,9 @@ describe('templates', () => {
     expect(text.replace(/\u00a0/g, ' ')).toBe('28 ft; 2.5 kip; 1.235; 1.2; 1 × 10⁻⁶; 1.77 %');
     expect(t({ h: 8.5, P: 12_000, n: 1, e: 0.05, s: 1 }, { units: 'si' }).replace(/\u00a0/g, ' ')).toBe('8.5 m; 12 kN; 1; 1; 0.05; 100 %');
     expect(() => t({ h: 1, P: 1, n: 1, e: 1, s: 1 })).toThrow(/\{\{qty\}\} needs the unit system/);
+    // the package's own printing: a density in US units as the unit weight it gives
+    // (7850 kg/m³ × 9.80665 m/s² / 157.0875 N/m³ per lb/ft³ = 490.06 lb/ft³, NIST SP 811 App. B)
+    expect(compileTemplate('{{qty rho "density"}}')({ rho: 7850 }, { units: 'us' })).toBe('490.1 lb/ft³');
     expect(() => t({ h: Number.NaN, P: 1, n: 1, e: 1, s: 1 }, { units: 'si' })).toThrow(/\{\{qty\}\} needs a finite number/);
   });
 

@@ -2,7 +2,7 @@
 // instance, strict: a value the template names and the section does not give is an error naming
 // the key and its line:column; no HTML escaping, since a PDF is not HTML). Helpers print numbers the
 // one way the package prints them:
-//   {{qty value "length"}}   an SI value in the package's units, with its unit (formatQuantity)
+//   {{qty value "length"}}   an SI value in the package's units, with its unit (display.ts, formatQuantity)
 //   {{num value}}            a plain number (formatNumber); {{num value 3}} with 3 significant digits
 //   {{tol value}}            a tolerance or relative residual, written one way (formatTolerance)
 //   {{pct ratio}}            a fraction as a percentage, "1.77 %"
@@ -17,6 +17,7 @@ import Handlebars from 'handlebars';
 import { packageRoot } from '../../package-root.ts';
 import { formatNumber, formatPercent, formatQuantity, formatTolerance, type Dim, type UnitSystem } from '../../units/units.ts';
 import type { Block } from '../document.ts';
+import { display } from './display.ts';
 
 /** What a section may hand a template: text, numbers (SI for qty), flags for {{#if}}. */
 export type TemplateValue = string | number | boolean;
@@ -47,7 +48,9 @@ hb.registerHelper('qty', function (this: unknown, value: unknown, dim: unknown, 
   const units = (o.data as { units?: UnitSystem } | undefined)?.units;
   if (units === undefined) throw new Error(`{{qty}} needs the unit system: render the template with { units }${where(o)}`);
   if (typeof dim !== 'string') throw new Error(`{{qty}} needs a quantity kind such as "length"${where(o)}`);
-  return formatQuantity(finite('qty', value, o), dim as Dim, units, digitsOf(rest));
+  const digits = digitsOf(rest);
+  // the package's own printing (a US density as a unit weight), or the digits asked for
+  return digits === undefined ? display(units).q(finite('qty', value, o), dim as Dim) : formatQuantity(finite('qty', value, o), dim as Dim, units, digits);
 });
 hb.registerHelper('num', function (this: unknown, value: unknown, ...rest: unknown[]) {
   const o = rest.pop() as HelperOptions;
