@@ -74,6 +74,8 @@ export function assumptionValue(a: Assumption, d: Display): string {
   if (typeof a.value === 'boolean') return a.value ? 'yes' : 'no';
   if (typeof a.value === 'string') return a.value;
   if (a.dim === 'ratio') return ratioText(a.value);
+  // a density in US units prints as its unit weight, and says so beside a label that names the density
+  if (a.dim === 'density' && d.units === 'us') return `${d.q(a.value, a.dim)} (unit weight γ = ρ g)`;
   if (a.dim !== undefined) return d.q(a.value, a.dim);
   return formatNumber(a.value, 6);
 }
