@@ -13,6 +13,11 @@ export const qty = (si: number, dim: Dim): Qty => ({ si, dim });
 /** A formula with values: text pieces and quantities, printed in order. */
 export type Expr = ReadonlyArray<string | Qty>;
 
+/** A total printed with its addends: "a + b + c" (a checker adds them up by hand). */
+export function sumExpr(addends: readonly Qty[]): Expr {
+  return addends.flatMap((q, k) => (k === 0 ? [q] : [' + ', q]));
+}
+
 export type StepStatus = 'info' | 'ok' | 'fail' | 'warn';
 
 export interface CalcStep {

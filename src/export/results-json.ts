@@ -30,7 +30,7 @@ export interface ResultsJsonInput {
 
 /** SI unit of each kind of quantity, for the check records. */
 const SI_UNIT: Readonly<Record<Dim, string>> = {
-  length: 'm', section: 'm', area: 'm2', force: 'N', weight: 'N', moment: 'N*m', pressure: 'Pa', stress: 'Pa', density: 'kg/m3',
+  length: 'm', section: 'm', area: 'm2', force: 'N', weight: 'N', moment: 'N*m', pressure: 'Pa', stress: 'Pa', density: 'kg/m3', unitWeight: 'N/m3',
   lineLoad: 'N/m', rotStiffness: 'N*m/rad', angle: 'rad', taper: 'm/m', speed: 'm/s', frequency: 'Hz', sectionArea: 'm2',
   inertia: 'm4', modulus: 'm3', mass: 'kg', ratio: '1',
 };

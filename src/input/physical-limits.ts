@@ -15,6 +15,7 @@ export const PHYSICAL_LIMIT_SI: Readonly<Record<Dim, number>> = {
   pressure: 1e5, // Pa: 100 kPa (about 2090 psf), beyond any wind pressure or weight per area
   stress: 1e12, // Pa: five times the modulus of steel
   density: 1e5, // kg/m3: over four times the densest metal
+  unitWeight: 1e6, // N/m3: the same, times g
   lineLoad: 1e8, // N/m
   rotStiffness: 1e13, // N*m/rad: stiffer than the pole itself by orders of magnitude
   angle: Infinity, // rad: any finite angle is a direction

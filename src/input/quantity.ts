@@ -15,6 +15,7 @@ export const DIM_NAMES: Readonly<Record<Dim, string>> = {
   pressure: 'pressure',
   stress: 'stress',
   density: 'density',
+  unitWeight: 'unit weight',
   lineLoad: 'load per length',
   rotStiffness: 'rotational stiffness',
   angle: 'angle',

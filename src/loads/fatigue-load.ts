@@ -12,7 +12,7 @@ import { add, dot, norm, scale } from '../model/vec3.ts';
 import { attachmentLoads, planUnit } from './attachment-loads.ts';
 import { directionKey } from './case-ids.ts';
 import type { AppliedLoad, LoadCase } from './load-types.ts';
-import { loadResultant } from './load-resultant.ts';
+import { loadResultant, sumByOrigin } from './load-resultant.ts';
 import { normalComponent } from './wind-load.ts';
 
 export const GALLOPING_CASE_ID = 'fatigue-galloping';
@@ -186,7 +186,7 @@ function attachmentHeight(design: Design, a: Attachment): number {
 function total(steps: StepCollector, model: FrameModel, loads: readonly AppliedLoad[], how: 'vertical' | 'horizontal', wdir?: Vec3): void {
   const R = loadResultant(model, loads).force_N;
   const v = how === 'vertical' ? R[2] : dot(R, wdir as Vec3);
-  steps.add({ description: `Total ${how === 'vertical' ? 'vertical force' : 'horizontal force along the wind direction'} of this case (sum of the loads)`, symbol: 'ΣF', formula: 'ΣF = Σ F', substituted: [qty(v, 'force')], result: qty(v, 'force'), source: 'sum of the loads above' });
+  steps.add({ description: `Total ${how === 'vertical' ? 'vertical force' : 'horizontal force along the wind direction'} of this case (sum of the loads)`, symbol: 'ΣF', formula: 'ΣF = Σ F', substituted: sumByOrigin(model, loads, (F) => (how === 'vertical' ? F[2] : dot(F, wdir as Vec3))), result: qty(v, 'force'), source: 'sum of the loads above' });
 }
 
 /** Positions along the arm (within [from, to]) where the height factor has a kink: where the

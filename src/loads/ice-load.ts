@@ -1,7 +1,7 @@
 // Ice load case: a weight per surface area on members (all round) and attachments
 // (panels: one face; point attachments: their projected wind area), with the offset
 // moments of the attachment ice.
-import { qty, StepCollector } from '../calc/step.ts';
+import { qty, StepCollector, sumExpr, type Qty } from '../calc/step.ts';
 import type { Design, IceInput } from '../design/design.ts';
 import type { FrameModel } from '../model/frame.ts';
 import { elementEnds } from '../model/locate.ts';
@@ -17,6 +17,7 @@ export function iceLoadCase(design: Design, model: FrameModel, ice: IceInput): L
   const steps = new StepCollector();
   const loads: AppliedLoad[] = [];
   const q = ice.weightPerArea_Pa;
+  const weights: Qty[] = []; // the addends of the total
   for (const ax of memberAxes(design)) {
     const info = model.members.find((m) => m.id === ax.id);
     if (!info) throw new RangeError(`member ${ax.id} is missing from the frame model`);
@@ -34,16 +35,16 @@ export function iceLoadCase(design: Design, model: FrameModel, ice: IceInput): L
     for (const [where, P] of [['root', Pr], ['tip', Pt]] as const) {
       steps.add({ description: `Ice per length on the ${name} at its ${where} (${perimeterFormula})`, symbol: `w_ice,${where}`, formula: 'w = q_ice × P', substituted: [qty(q, 'pressure'), ' × ', qty(P, 'section')], result: qty(q * P, 'lineLoad'), source: RULES.iceMembers });
     }
-    steps.add({ description: `Ice on the ${name}`, symbol: `W_ice,${ax.id}`, formula: 'W = L (w_root + w_tip) / 2', substituted: [qty(ax.length_m, 'length'), ' × (', qty(q * Pr, 'lineLoad'), ' + ', qty(q * Pt, 'lineLoad'), ') / 2'], result: qty((ax.length_m * q * (Pr + Pt)) / 2, 'weight'), source: 'integral of a linearly varying load' });
+    weights.push(steps.add({ description: `Ice on the ${name}`, symbol: `W_ice,${ax.id}`, formula: 'W = L (w_root + w_tip) / 2', substituted: [qty(ax.length_m, 'length'), ' × (', qty(q * Pr, 'lineLoad'), ' + ', qty(q * Pt, 'lineLoad'), ') / 2'], result: qty((ax.length_m * q * (Pr + Pt)) / 2, 'weight'), source: 'integral of a linearly varying load' }));
   }
   for (const a of design.attachments) {
     const panel = a.kind === 'panel';
     const area = panel ? a.width_m * a.height_m : a.windArea_m2;
     const W = q * area;
-    steps.add({ description: `Ice on ${a.kind} ${a.id}`, symbol: `W_ice,${a.id}`, formula: panel ? 'W = q_ice × b × h (one face)' : 'W = q_ice × A', substituted: [qty(q, 'pressure'), ' × ', qty(area, 'area')], result: qty(W, 'weight'), source: panel ? RULES.icePanels : RULES.icePoints });
+    weights.push(steps.add({ description: `Ice on ${a.kind} ${a.id}`, symbol: `W_ice,${a.id}`, formula: panel ? 'W = q_ice × b × h (one face)' : 'W = q_ice × A', substituted: [qty(q, 'pressure'), ' × ', qty(area, 'area')], result: qty(W, 'weight'), source: panel ? RULES.icePanels : RULES.icePoints }));
     loads.push(...attachmentLoads(design, model, steps, a, down(W), `ice on ${a.kind}`));
   }
   const total = -loadResultant(model, loads).force_N[2];
-  steps.add({ description: 'Total ice load (sum of the loads of this case)', symbol: 'ΣI', formula: 'ΣI = Σ W', substituted: [qty(total, 'force')], result: qty(total, 'force'), source: 'sum of the loads above' });
+  steps.add({ description: 'Total ice load (sum of the loads of this case)', symbol: 'ΣI', formula: 'ΣI = Σ W', substituted: sumExpr(weights), result: qty(total, 'force'), source: 'sum of the loads above' });
   return { id: ICE_CASE_ID, kind: 'ice', description: 'Ice: weight of ice on members and attachments', windAngle_rad: null, loads, steps: steps.steps };
 }

@@ -3,6 +3,7 @@
 import type { FrameModel, Vec3 } from '../model/frame.ts';
 import { elementEnds } from '../model/locate.ts';
 import { add, cross, dot, scale, sub, unit } from '../model/vec3.ts';
+import { qty, type Expr } from '../calc/step.ts';
 import type { AppliedLoad } from './load-types.ts';
 
 export interface Resultant {
@@ -54,4 +55,23 @@ export function loadResultant(model: FrameModel, loads: readonly AppliedLoad[]):
     }
   }
   return { force_N: F, moment_Nm: M };
+}
+
+/**
+ * A total printed with its addends: the loads grouped by their origin ("wind on pole", "wind on
+ * panel N1"), each group's force component, labelled; groups that add no force (the moments of
+ * offsets) are left out. The addends sum to the total exactly, so a checker can add them by hand.
+ */
+export function sumByOrigin(model: FrameModel, loads: readonly AppliedLoad[], component: (F: Vec3) => number): Expr {
+  const groups = new Map<string, AppliedLoad[]>();
+  for (const l of loads) {
+    const g = groups.get(l.origin.source);
+    if (g) g.push(l);
+    else groups.set(l.origin.source, [l]);
+  }
+  const parts = [...groups].map(([source, ls]) => ({ source, v: component(loadResultant(model, ls).force_N) }));
+  const big = Math.max(0, ...parts.map((p) => Math.abs(p.v)));
+  const kept = parts.filter((p) => Math.abs(p.v) > 1e-9 * big);
+  if (kept.length === 0) return [qty(0, 'force')];
+  return kept.flatMap((p, k) => [...(k === 0 ? [] : [' + ']), qty(p.v, 'force'), ` (${p.source})`]);
 }

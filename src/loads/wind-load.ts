@@ -4,6 +4,7 @@
 // the face at the panel centroid; point attachments: pressure × effective projected area
 // in the wind direction. Offsets put their moments r × F on the members.
 import { qty, StepCollector } from '../calc/step.ts';
+import { formatNumber } from '../units/units.ts';
 import type { Design, WindDirection } from '../design/design.ts';
 import type { FrameModel, Vec3 } from '../model/frame.ts';
 import { elementEnds } from '../model/locate.ts';
@@ -15,7 +16,7 @@ import { iceWindCaseId, windCaseId } from './case-ids.ts';
 import type { AppliedLoad, LoadCase } from './load-types.ts';
 import { RULES } from './load-rules.ts';
 import { memberPressure, memberPressureIsTyped, panelPressure, pointPressure } from './wind-pressure.ts';
-import { loadResultant } from './load-resultant.ts';
+import { loadResultant, sumByOrigin } from './load-resultant.ts';
 
 /** sin θ below this: the member is taken as parallel to the wind (no load). */
 const PARALLEL_SIN = 1e-9;
@@ -41,9 +42,9 @@ export function windLoadCase(design: Design, model: FrameModel, dir: WindDirecti
   const f = opts.factor;
   if (opts.kind === 'ice-wind') {
     for (const [what, p] of [['members', w.membersPressure_Pa], ['panels', w.panelsPressure_Pa], ['points', w.pointsPressure_Pa]] as const) {
-      if (p !== null) steps.add({ description: `Wind pressure on ${what} with ice`, symbol: `p_${what}`, formula: 'p = f_ice × p', substituted: [String(f), ' × ', qty(p, 'pressure')], result: qty(f * p, 'pressure'), source: RULES.iceWind });
+      if (p !== null) steps.add({ description: `Wind pressure on ${what} with ice`, symbol: `p_${what}`, formula: 'p = f_ice × p', substituted: [formatNumber(f), ' × ', qty(p, 'pressure')], result: qty(f * p, 'pressure'), source: RULES.iceWind });
     }
-    if (w.speed) steps.add({ description: 'Factor on the pressures from the wind speed, with ice', symbol: 'f_ice', formula: 'f_ice', substituted: [String(f)], result: qty(f, 'ratio'), source: RULES.iceWind });
+    if (w.speed) steps.add({ description: 'Factor on the pressures from the wind speed, with ice', symbol: 'f_ice', formula: 'f_ice', substituted: [formatNumber(f)], result: qty(f, 'ratio'), source: RULES.iceWind });
   }
   const tag = opts.kind === 'wind' ? 'wind' : 'wind with ice';
 
@@ -119,10 +120,12 @@ export function windLoadCase(design: Design, model: FrameModel, dir: WindDirecti
 
   const R = loadResultant(model, loads).force_N;
   const along = dot(R, wdir);
-  steps.add({ description: 'Total horizontal wind force along the wind direction (sum of the loads of this case)', symbol: 'ΣF_w', formula: 'ΣF_w = Σ F · ŵ', substituted: [qty(along, 'force')], result: qty(along, 'force'), source: 'sum of the loads above' });
+  steps.add({ description: 'Total horizontal wind force along the wind direction (sum of the loads of this case)', symbol: 'ΣF_w', formula: 'ΣF_w = Σ F · ŵ', substituted: sumByOrigin(model, loads, (F) => dot(F, wdir)), result: qty(along, 'force'), source: 'sum of the loads above' });
   const across = Math.hypot(R[0] - along * wdir[0], R[1] - along * wdir[1]);
   if (across > 1e-6 * Math.max(1, Math.abs(along))) {
-    steps.add({ description: 'Total horizontal force across the wind direction (panel faces and members not normal to the wind)', symbol: 'ΣF_⊥', formula: 'ΣF_⊥ = |ΣF − (ΣF · ŵ) ŵ|', substituted: [qty(across, 'force')], result: qty(across, 'force'), source: 'sum of the loads above' });
+    // its addends: each group's component along the across-wind direction of the total
+    const c: Vec3 = [(R[0] - along * wdir[0]) / across, (R[1] - along * wdir[1]) / across, 0];
+    steps.add({ description: 'Total horizontal force across the wind direction (panel faces and members not normal to the wind)', symbol: 'ΣF_⊥', formula: 'ΣF_⊥ = |ΣF − (ΣF · ŵ) ŵ|', substituted: sumByOrigin(model, loads, (F) => dot(F, c)), result: qty(across, 'force'), source: 'sum of the loads above' });
   }
   const id = opts.kind === 'wind' ? windCaseId(dir.angle_rad) : iceWindCaseId(dir.angle_rad);
   const deg = ((dir.angle_rad * 180) / Math.PI).toFixed(1).replace(/\.0$/, '');

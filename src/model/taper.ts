@@ -34,8 +34,9 @@ export function weightPerLength(A_m2: number, density_kgm3: number): WeightPerLe
       {
         description: 'Steel weight per length',
         symbol: 'w',
-        formula: 'w = ρ g A',
-        substituted: [qty(density_kgm3, 'density'), ' × g × ', qty(A_m2, 'sectionArea')],
+        // the unit weight γ = ρ g, as US practice states it (lb/ft³), not a mass density times g
+        formula: 'w = γ A, γ = ρ g',
+        substituted: [qty(density_kgm3 * STANDARD_GRAVITY_mps2, 'unitWeight'), ' × ', qty(A_m2, 'sectionArea')],
         result: qty(w, 'lineLoad'),
         source: STANDARD_GRAVITY_SOURCE,
         status: 'info',

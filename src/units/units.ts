@@ -1,6 +1,9 @@
 // The one internal unit system is SI base units: m, N, Pa, kg, rad, s.
 // Conversion happens only here: when reading input and when printing.
 // Exact factors from NIST Special Publication 811 (2008), Appendix B.
+import { formatNumber } from './number-format.ts';
+
+export { formatNumber, formatPercent, formatRatio, formatTolerance, powerOfTen } from './number-format.ts';
 
 export type UnitSystem = 'us' | 'si';
 
@@ -15,7 +18,8 @@ export type Dim =
   | 'moment' // kip*ft | kN*m
   | 'pressure' // wind pressure, weight per area: psf | kPa
   | 'stress' // ksi | MPa
-  | 'density' // pcf | kg/m3
+  | 'density' // pcf | kg/m3 (mass per volume; input only in US units, where pcf is read as lb/ft3)
+  | 'unitWeight' // lb/ft3 | kN/m3 (weight per volume, γ = ρ g: how a density prints in US units)
   | 'lineLoad' // lb/ft | kN/m
   | 'rotStiffness' // kip*ft/rad | kN*m/rad
   | 'angle' // deg (both systems)
@@ -92,6 +96,9 @@ export const UNITS: readonly UnitDef[] = [
   u('kPa', 'stress', 1e3),
   u('pcf', 'density', PCF_KGM3, 'lb/ft3', 'lb/ft^3'),
   u('kg/m3', 'density', 1, 'kg/m^3'),
+  u('lb/ft3', 'unitWeight', LBF_N / FT_M ** 3, 'pcf', 'lb/ft^3'),
+  u('kN/m3', 'unitWeight', 1e3, 'kN/m^3'),
+  u('N/m3', 'unitWeight', 1, 'N/m^3'),
   u('lb/ft', 'lineLoad', LBF_N / FT_M, 'plf'),
   u('kip/ft', 'lineLoad', KIP_N / FT_M, 'klf'),
   u('N/m', 'lineLoad', 1),
@@ -123,13 +130,13 @@ export const UNITS: readonly UnitDef[] = [
 export const SYSTEM_UNIT: Readonly<Record<UnitSystem, Readonly<Record<Dim, string>>>> = {
   us: {
     length: 'ft', section: 'in', area: 'ft2', force: 'kip', weight: 'lb', moment: 'kip*ft',
-    pressure: 'psf', stress: 'ksi', density: 'pcf', lineLoad: 'lb/ft', rotStiffness: 'kip*ft/rad',
+    pressure: 'psf', stress: 'ksi', density: 'pcf', unitWeight: 'lb/ft3', lineLoad: 'lb/ft', rotStiffness: 'kip*ft/rad',
     angle: 'deg', taper: 'in/ft', speed: 'mph', frequency: 'Hz', sectionArea: 'in2', inertia: 'in4',
     modulus: 'in3', mass: 'lbm', ratio: '',
   },
   si: {
     length: 'm', section: 'mm', area: 'm2', force: 'kN', weight: 'N', moment: 'kN*m',
-    pressure: 'kPa', stress: 'MPa', density: 'kg/m3', lineLoad: 'kN/m', rotStiffness: 'kN*m/rad',
+    pressure: 'kPa', stress: 'MPa', density: 'kg/m3', unitWeight: 'kN/m3', lineLoad: 'kN/m', rotStiffness: 'kN*m/rad',
     angle: 'deg', taper: 'mm/m', speed: 'm/s', frequency: 'Hz', sectionArea: 'mm2', inertia: 'mm4',
     modulus: 'mm3', mass: 'kg', ratio: '',
   },
@@ -199,22 +206,23 @@ export function prettyUnit(symbol: string): string {
     .replace(/([a-zA-Z])4\b/g, '$1⁴');
 }
 
-/** Formats an SI value in the display unit of the system, with the unit. */
-export function formatQuantity(valueSI: number, dim: Dim, system: UnitSystem, digits = 4): string {
+/**
+ * Significant digits a quantity prints with, by kind. Four for what a checker reworks by hand
+ * (dimensions, forces, moments, stresses, section properties: the last digit moves by at most
+ * 0.05 %, well inside what the input is known to); three for natural frequencies, which the
+ * lumped-mass model gives no better (common practice).
+ */
+export const DIGITS: Readonly<Record<Dim, number>> = {
+  length: 4, section: 4, area: 4, force: 4, weight: 4, moment: 4, pressure: 4, stress: 4, density: 4, unitWeight: 4,
+  lineLoad: 4, rotStiffness: 4, angle: 4, taper: 4, speed: 4, frequency: 3, sectionArea: 4, inertia: 4, modulus: 4,
+  mass: 4, ratio: 4,
+};
+
+/** Formats an SI value in the display unit of the system, with the unit, to the digits of its kind. */
+export function formatQuantity(valueSI: number, dim: Dim, system: UnitSystem, digits = DIGITS[dim]): string {
   const unit = displayUnit(system, dim);
   const v = fromSI(valueSI, unit, dim);
   const text = formatNumber(v, digits);
   return unit === '' ? text : `${text} ${prettyUnit(unit)}`;
 }
 
-/** Significant-figure formatting with a plain ASCII minus and no exponent for everyday magnitudes. */
-export function formatNumber(v: number, digits = 4): string {
-  if (!Number.isFinite(v)) return String(v);
-  if (v === 0 || Object.is(v, -0)) return '0';
-  const mag = Math.floor(Math.log10(Math.abs(v)));
-  if (mag >= 7 || mag <= -5) return v.toExponential(Math.max(digits - 1, 0)).replace('e+', 'e');
-  const decimals = Math.max(0, digits - 1 - mag);
-  const fixed = v.toFixed(Math.min(decimals, 8));
-  const clean = fixed.includes('.') ? fixed.replace(/0+$/, '').replace(/\.$/, '') : fixed;
-  return clean === '-0' ? '0' : clean;
-}

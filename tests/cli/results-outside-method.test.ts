@@ -10,7 +10,7 @@ import { join } from 'node:path';
 import { tmpdir } from 'node:os';
 import { parseDocument } from 'yaml';
 import { cli } from './run-cli.ts';
-import { readPdf, squeeze } from '../report/pdf-tools.ts';
+import { readPdfText, squeeze } from '../support/pdf-text.ts';
 
 const ROOT = join(import.meta.dirname, '../..');
 const SIGNAL = readFileSync(join(ROOT, 'examples/signal-support.yaml'), 'utf8');
@@ -23,7 +23,7 @@ async function buildWithE(E: string) {
     writeFileSync(join(dir, 'signal.yaml'), doc.toString());
     const r = await cli(['build', 'signal.yaml', '--out', 'out', '--json'], { cwd: dir, env: { SOURCE_DATE_EPOCH: '1767225600' } });
     const pdfPath = join(dir, 'out', 'signal.pdf');
-    const pdf = existsSync(pdfPath) ? squeeze(readPdf(readFileSync(pdfPath)).pages.join('\n')) : null;
+    const pdf = existsSync(pdfPath) ? squeeze((await readPdfText(readFileSync(pdfPath))).pages.join('\n')) : null;
     const jsonPath = join(dir, 'out', 'signal.results.json');
     const json = existsSync(jsonPath) ? (JSON.parse(readFileSync(jsonPath, 'utf8')) as { analysis: { outsideMethod: { limitRatio: number; movements: { member: string; combination: string; ratio: number }[] } } }) : null;
     return { ...r, pdf, json };

@@ -13,7 +13,7 @@ import { resultsJson } from '../../src/export/results-json.ts';
 import { analysisSummaryLines, movementWarningLines } from '../../src/analysis-summary.ts';
 import { FileLevelError, InputError, UnstableStructureError, formatDiagnostic } from '../../src/errors.ts';
 import { cli } from '../cli/run-cli.ts';
-import { readPdf } from '../report/pdf-tools.ts';
+import { readPdfText } from '../support/pdf-text.ts';
 
 export type Outcome =
   | { readonly kind: 'input'; readonly first: string }
@@ -118,7 +118,7 @@ export function runLibrary(text: string, file: string): Outcome {
   return { kind: 'ok' };
 }
 
-/** The whole CLI, in-process: `build file --out dir --json`; the PDF is read back with pdftotext. */
+/** The whole CLI, in-process: `build file --out dir --json`; the PDF is read back with pdfjs-dist. */
 export async function runCliCase(text: string, name: string): Promise<Outcome> {
   const dir = mkdtempSync(join(tmpdir(), 'polebook-fuzz-'));
   try {
@@ -150,7 +150,7 @@ async function cliCase(dir: string, text: string, name: string): Promise<Outcome
       if (!written.includes(`${stem}.pdf`)) return { kind: 'failure', reason: `exit ${r.code} without a PDF` };
       const json = readFileSync(join(out, `${stem}.results.json`), 'utf8');
       const scanText = !userWritesNaN(text);
-      const pdfText = scanText ? readPdf(readFileSync(join(out, `${stem}.pdf`))).pages : [];
+      const pdfText = scanText ? (await readPdfText(readFileSync(join(out, `${stem}.pdf`)))).pages : [];
       const bad = [
         ...nonFinite(JSON.parse(json), { text: scanText }),
         ...nullQuantities(json),

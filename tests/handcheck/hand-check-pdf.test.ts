@@ -1,4 +1,4 @@
-// The built package, read back with pdftotext (poppler-utils, outside the project), holds the
+// The built package, read back with pdfjs-dist (a PDF reader outside the project), holds the
 // hand-check section, its steps, the integration tables and the comparison table with numbers.
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -6,7 +6,7 @@ import { compareWithMatrix } from '../../src/handcheck/matrix-comparison.ts';
 import { momentAreaCheck } from '../../src/handcheck/moment-area.ts';
 import { buildPackage, type PackageResult } from '../../src/pipeline.ts';
 import { formatQuantity } from '../../src/units/units.ts';
-import { readPdf, squeeze } from '../report/pdf-tools.ts';
+import { readPdfText, squeeze } from '../support/pdf-text.ts';
 
 const ROOT = join(import.meta.dirname, '..', '..');
 
@@ -15,7 +15,7 @@ describe.each(['cantilever-sign.yaml', 'luminaire-twin.yaml'])('examples/%s buil
   let text: string;
   beforeAll(async () => {
     built = await buildPackage(join(ROOT, 'examples', example), { env: { SOURCE_DATE_EPOCH: '1767225600' } });
-    text = readPdf(built.pdf).pages.join('\n');
+    text = (await readPdfText(built.pdf)).pages.join('\n');
   }, 120_000);
 
   it('has the section, after "Design checks" (the design before the derivation), in the contents and the body', () => {

@@ -77,13 +77,13 @@ describe('buildDocument', () => {
 
   it('every number in the geometry and loads tables carries a unit, or is a labelled dimensionless factor', () => {
     const doc = buildDocument(FIXTURE_LOADED);
-    const unit = /\d(?:\.\d+)?(?:e-?\d+)? ?(?:m|mm|m²|kN|N|kPa|MPa|kg\/m³|deg|kN·m|segments|iterations|bolts)(?![A-Za-z0-9])/;
+    const unit = /\d(?:\.\d+)?(?:\u00a0×\u00a010[⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+)? ?(?:m|mm|m²|kN|N|kPa|MPa|kg\/m³|deg|kN·m|segments|iterations|bolts)(?![A-Za-z0-9])/;
     for (const id of ['geometry', 'loads', 'criteria']) {
       for (const t of tables(section(id, doc.sections))) {
         if (t.title === 'Assumptions and defaults') continue; // checked above, value by value
         for (const row of t.rows) {
           const label = row.join(' | ');
-          const dimensionless = /dimensionless|^(STR|EXW|EXI|SVC)-\d/.test(label) || /^[LH]\/\d+$/.test(row[1] ?? '');
+          const dimensionless = /dimensionless|^(STR|EXW|EXI|SVC)[-\u2011]\d/.test(label) || /^[LH]\/\d+$/.test(row[1] ?? '');
           for (const cell of row.slice(1)) {
             if (!/\d/.test(cell) || dimensionless) continue;
             // Ids such as "S1" and "A1" and steel grades are names, not numbers.

@@ -3,7 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Block, DocumentModel } from '../../src/report/document.ts';
 import { renderPdf } from '../../src/report/pdf/render-pdf.ts';
-import { readPdf } from './pdf-tools.ts';
+import { readPdfText } from '../support/pdf-text.ts';
 
 const META: DocumentModel['meta'] = {
   projectName: 'Layout test',
@@ -41,7 +41,7 @@ function model(blocks: Block[]): DocumentModel {
 
 describe('page flow', () => {
   it('a table running over pages repeats its title and header row on each page, and loses no row', async () => {
-    const r = readPdf(await renderPdf(model([{ kind: 'heading', level: 2, text: 'Stations' }, longTable])));
+    const r = await readPdfText(await renderPdf(model([{ kind: 'heading', level: 2, text: 'Stations' }, longTable])));
     const tablePages = r.pages.filter((p) => /row \d+/.test(p));
     expect(tablePages.length).toBeGreaterThan(1);
     for (const p of tablePages) {
@@ -55,7 +55,7 @@ describe('page flow', () => {
   it('a heading before a long table is never the last thing on a page, wherever it falls', async () => {
     // 10 pt body lines: stepping the filler moves the heading through the lower part of the page.
     for (let n = 24; n <= 44; n += 2) {
-      const r = readPdf(await renderPdf(model([...filler(n), { kind: 'heading', level: 2, text: 'Station table' }, longTable])));
+      const r = await readPdfText(await renderPdf(model([...filler(n), { kind: 'heading', level: 2, text: 'Station table' }, longTable])));
       const page = r.pages.find((p) => !p.includes('Contents') && p.includes('1.1 Station table'));
       expect(page, `filler ${n}`).toBeDefined();
       const after = page!.slice(page!.indexOf('1.1 Station table'));
@@ -66,7 +66,7 @@ describe('page flow', () => {
   it('a heading and a short block after it stay on one page', async () => {
     for (let n = 30; n <= 44; n += 2) {
       const blocks: Block[] = [...filler(n), { kind: 'heading', level: 2, text: 'Short list' }, { kind: 'bullets', items: ['first item', 'second item', 'third item'] }];
-      const r = readPdf(await renderPdf(model(blocks)));
+      const r = await readPdfText(await renderPdf(model(blocks)));
       const page = r.pages.find((p) => !p.includes('Contents') && p.includes('1.1 Short list'));
       expect(page, `filler ${n}`).toContain('third item');
     }

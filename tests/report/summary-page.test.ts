@@ -16,7 +16,7 @@ interface Json {
   checks: { verdict: { title: string; worst: { ratio: number; combination: string | null } }[] };
 }
 
-const plain = (s: string) => s.replace(/\u2011/g, '-');
+const plain = (s: string) => s.replace(/\u2011/g, '-').replace(/\u200b/g, '');
 
 for (const file of ['examples/cantilever-sign.yaml', 'examples/luminaire-twin.yaml', 'examples/signal-support.yaml']) {
   describe(`summary of ${file}`, () => {

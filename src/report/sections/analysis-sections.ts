@@ -5,6 +5,7 @@
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { LoadedDesign } from '../../design/design.ts';
 import type { DocSection } from '../document.ts';
+import { printedIds, withUnbrokenIds } from '../format/unbroken-ids.ts';
 import { combinationsSection } from './combinations-section.ts';
 import { diagramsSection } from './diagrams-section.ts';
 import { elevationPlanSection } from './elevation-plan-section.ts';
@@ -19,7 +20,7 @@ import type { MemberChart } from './member-charts.ts';
 /** With the checks, the free-body diagrams of the combinations that govern them follow the results. */
 export function analysisSections(loaded: LoadedDesign, analysis: DesignAnalysis, checkSections: readonly DocSection[] = [], checks: CheckResults | null = null, charts: readonly MemberChart[] | null = null): DocSection[] {
   const loads = loadCasesSections(loaded, analysis);
-  return [
+  const sections = [
     structuralModelSection(loaded, analysis),
     elevationPlanSection(loaded, analysis),
     loads.main,
@@ -32,4 +33,6 @@ export function analysisSections(loaded: LoadedDesign, analysis: DesignAnalysis,
     loads.steps,
     staticsTablesSection(loaded, analysis),
   ];
+  return withUnbrokenIds(sections, printedIds(analysis));
+  return withUnbrokenIds(sections, printedIds(analysis));
 }

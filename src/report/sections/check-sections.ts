@@ -1,6 +1,9 @@
 // Section "Design checks": the verdict by check type, the governing check of each type and
 // member worked in full, and for each member and combination the station that governs.
 // Reads the check records; computes no engineering.
+import { formatRatio } from '../../units/units.ts';
+import { printedIds, withUnbrokenIds } from '../format/unbroken-ids.ts';
+import { withoutRoundOff } from './round-off.ts';
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { CheckRecord, CheckResults } from '../../checks/check-types.ts';
 import { CHECK_TITLES, verdictByType } from '../../checks/verdict.ts';
@@ -18,11 +21,7 @@ export function checkSections(loaded: LoadedDesign, analysis: DesignAnalysis, ch
   const { design } = loaded;
   const d = display(design.units);
   const blocks: Block[] = [
-    ...templateBlocks('checks', {
-      analysisOrder: analysis.options.secondOrder
-        ? 'The demands come from the second-order (P-delta) analysis of each combination.'
-        : 'The demands come from a first-order analysis (--first-order or analysis.secondOrder: false): second-order effects are not in them.',
-    }).blocks,
+    ...templateBlocks('checks', { secondOrder: analysis.options.secondOrder }).blocks,
   ];
   const verdict = verdictByType(checks.records);
   blocks.push({
@@ -43,16 +42,18 @@ export function checkSections(loaded: LoadedDesign, analysis: DesignAnalysis, ch
     // Anchor bolts and base plate have no station: one record per combination, no station column.
     const stations = rows.some((x) => x.s_m !== null);
     if (rows.length > 1) {
+      // a demand that is round-off next to the largest demand of the table prints as 0
+      const big = Math.max(...rows.map((x) => Math.abs(x.demand.si)));
       blocks.push({
         kind: 'table',
         title: `${CHECK_TITLES[r.type]}, ${memberText(r.member)}: ${stations ? 'governing station of each combination' : 'each combination'}`,
         header: ['Combination', ...(stations ? ['Station'] : []), 'Demand', 'Capacity', 'Ratio', 'Result'],
         widths: ['*', ...(stations ? [60] : []), 70, 70, 40, 40],
-        rows: rows.map((x) => [x.combination ?? '—', ...(stations ? [x.s_m === null ? '—' : d.q(x.s_m, 'length')] : []), d.q(x.demand.si, x.demand.dim), d.q(x.capacity.si, x.capacity.dim), ratioText(x), STATUS_TEXT[x.status]]),
+        rows: rows.map((x) => [x.combination ?? '—', ...(stations ? [x.s_m === null ? '—' : d.q(x.s_m, 'length')] : []), d.q(withoutRoundOff(x.demand.si, big), x.demand.dim), d.q(x.capacity.si, x.capacity.dim), ratioText(x), STATUS_TEXT[x.status]]),
       });
     }
   }
-  return [{ id: 'checks', title: CHECKS_TITLE, blocks }];
+  return withUnbrokenIds([{ id: 'checks', title: CHECKS_TITLE, blocks }], printedIds(analysis));
 }
 
 /** The checks rest on the analysis: say so when some of its results are outside the small-displacement method. */

@@ -3,9 +3,9 @@
 import type { AnchorBolts, LoadedDesign } from '../../design/design.ts';
 import { boltThread, threadName } from '../../design/thread-tables.ts';
 import { bendingApplies } from '../../checks/anchor/bolt-bending.ts';
-import { formatNumber } from '../../units/units.ts';
+import { formatNumber, formatTolerance } from '../../units/units.ts';
 import type { Block, DocSection } from '../document.ts';
-import { assumptionValue, display, fractionText } from './display.ts';
+import { assumptionValue, densityLabel, display, fractionText } from './display.ts';
 import { templateBlocks } from './templates.ts';
 
 export const CRITERIA_TITLE = 'Design criteria and assumptions';
@@ -30,7 +30,7 @@ export function criteriaSection(loaded: LoadedDesign, secondOrder: boolean): Doc
       ['Modulus of elasticity, E', d.q(m.E_Pa, 'stress')],
       ['Shear modulus, G', d.q(m.G_Pa, 'stress')],
       ['Minimum yield strength, Fy', d.q(m.Fy_Pa, 'stress')],
-      ['Density', d.q(m.density_kgm3, 'density')],
+      [densityLabel(design.units), d.q(m.density_kgm3, 'density')],
     ],
   });
 
@@ -93,7 +93,7 @@ export function criteriaSection(loaded: LoadedDesign, secondOrder: boolean): Doc
     rows: [
       ['Prismatic segments per tapered member', `${a.segmentsPerMember} segments`],
       ['Second-order (P-delta) analysis', secondOrder ? 'yes' : a.secondOrder ? 'no: first order only, by the --first-order option of the command (the input asks for P-delta)' : 'no: first order only (analysis.secondOrder: false)'],
-      ['P-delta convergence tolerance (relative, dimensionless)', formatNumber(a.pDeltaTolerance)],
+      ['P-delta convergence tolerance (relative, dimensionless)', formatTolerance(a.pDeltaTolerance)],
       ['P-delta iteration cap', `${a.pDeltaMaxIterations} iterations`],
       ['Regular spacing of result stations', d.q(a.stationSpacing_m, 'length')],
     ],

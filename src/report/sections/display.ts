@@ -2,7 +2,8 @@
 // in the user's system (units.ts does the conversion and the digits).
 import { memberName } from '../../design/member-names.ts';
 import type { Assumption, Attachment, Offset, StructureKind, TubeSection } from '../../design/design.ts';
-import { formatNumber, formatQuantity, type Dim, type UnitSystem } from '../../units/units.ts';
+import { STANDARD_GRAVITY_mps2 } from '../../model/gravity.ts';
+import { formatNumber, formatQuantity, formatTolerance, type Dim, type UnitSystem } from '../../units/units.ts';
 
 export interface Display {
   readonly units: UnitSystem;
@@ -10,10 +11,24 @@ export interface Display {
   angle(rad: number): string;
 }
 
+/**
+ * US practice states the steel's weight per volume, the unit weight γ = ρ g in lb/ft³ (pcf), not a
+ * mass density (lbm/ft³ or slug/ft³): a density prints in US units as the unit weight it gives.
+ */
+function quantityText(si: number, dim: Dim, units: UnitSystem): string {
+  if (dim === 'density' && units === 'us') return formatQuantity(si * STANDARD_GRAVITY_mps2, 'unitWeight', units);
+  return formatQuantity(si, dim, units);
+}
+
+/** The name of the material's density row: the unit weight γ in US units, the density ρ in SI. */
+export function densityLabel(units: UnitSystem): string {
+  return units === 'us' ? 'Unit weight, γ = ρ g' : 'Density, ρ';
+}
+
 export function display(units: UnitSystem): Display {
   return {
     units,
-    q: (si, dim) => formatQuantity(si, dim, units),
+    q: (si, dim) => quantityText(si, dim, units),
     angle: (rad) => formatQuantity(rad, 'angle', units),
   };
 }
@@ -59,12 +74,16 @@ export function assumptionValue(a: Assumption, d: Display): string {
   if (typeof a.value === 'boolean') return a.value ? 'yes' : 'no';
   if (typeof a.value === 'string') return a.value;
   if (a.dim === 'ratio') return ratioText(a.value);
+  // a density in US units prints as its unit weight, and says so beside a label that names the density
+  if (a.dim === 'density' && d.units === 'us') return `${d.q(a.value, a.dim)} (unit weight γ = ρ g)`;
   if (a.dim !== undefined) return d.q(a.value, a.dim);
   return formatNumber(a.value, 6);
 }
 
 /** A dimensionless fraction; a limit such as 0.01 also shows as 1/100, the way it is usually given. */
 export function ratioText(v: number): string {
+  // a tolerance (1e-6) reads as a power of ten; an ordinary fraction to six digits
+  if (v !== 0 && Math.abs(v) < 1e-3) return formatTolerance(v);
   const text = formatNumber(v, 6);
   if (!(v > 0 && v < 1)) return text;
   const inverse = 1 / v;

@@ -6,7 +6,7 @@ import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { LoadedDesign } from '../../design/design.ts';
 import { compareWithMatrix, EXPECTED_AGREEMENT, type ComparisonRow } from '../../handcheck/matrix-comparison.ts';
 import { momentAreaCheck, TABLE_INTERVALS, type IntegrationTable, type MomentAreaCheck } from '../../handcheck/moment-area.ts';
-import { displayUnit, formatNumber, fromSI, prettyUnit, type UnitSystem } from '../../units/units.ts';
+import { displayUnit, formatNumber, formatPercent, formatTolerance, fromSI, prettyUnit, type UnitSystem } from '../../units/units.ts';
 import type { Block, DocSection } from '../document.ts';
 import { arrow, INK, line, polyline, svgDocument, text, type Pt } from '../figures/svg.ts';
 import { display, type Display } from './display.ts';
@@ -90,8 +90,8 @@ function quantitiesSketch(armId: string): { svg: string; width: number; height: 
 }
 
 function differenceText(r: ComparisonRow): string {
-  if (r.relativeDifference === null) return `nil in both (${r.differenceOfScale.toExponential(1)} of the tip drop)`;
-  return `${formatNumber(100 * r.relativeDifference, 3)} %`;
+  if (r.relativeDifference === null) return `nil in both (${formatTolerance(r.differenceOfScale)} of the tip drop)`;
+  return formatPercent(r.relativeDifference);
 }
 
 function otherSourcesText(check: MomentAreaCheck, d: Display): string {
@@ -114,12 +114,12 @@ export function handCheckSection(loaded: LoadedDesign, analysis: DesignAnalysis)
     ...templateBlocks('hand-check', {
       armId: arm.id,
       planeDirection: d.angle(arm.direction_rad),
-      segments: String(design.analysis.segmentsPerMember),
+      segments: design.analysis.segmentsPerMember,
       otherSources: otherSourcesText(check, d),
       rise: d.angle(arm.rise_rad),
-      points: String(check.quadrature.points),
-      panels: String(2 * check.quadrature.panels),
-      integrationError: check.integrationError === 0 ? '0 (exact)' : check.integrationError.toExponential(1),
+      points: check.quadrature.points,
+      panels: 2 * check.quadrature.panels,
+      integrationError: check.integrationError,
     }).blocks,
     (() => {
       const sk = quantitiesSketch(arm.id);

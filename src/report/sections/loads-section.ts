@@ -3,6 +3,7 @@
 import type { FatigueInput, LoadedDesign, LoadKind } from '../../design/design.ts';
 import { CATEGORY_TEXT } from './combination-labels.ts';
 import { formatNumber } from '../../units/units.ts';
+import { withUnbrokenIds } from '../format/unbroken-ids.ts';
 import type { Block, DocSection } from '../document.ts';
 import { display, type Display } from './display.ts';
 import { templateBlocks } from './templates.ts';
@@ -49,10 +50,7 @@ export function loadsSection(loaded: LoadedDesign): DocSection {
   const d = display(design.units);
   const w = design.wind;
   const typed = [w.membersPressure_Pa, w.panelsPressure_Pa, w.pointsPressure_Pa].every((p) => p !== null);
-  const pressureBasis = w.speed === null || typed
-    ? 'The design wind pressures are those given in the input, which already include the coefficients the user chose; the program does not change them.'
-    : 'Where a pressure is given in the input it is used as given; the others are computed from the wind speed below, P = 0.00256 Kz Kd G V² Cd at each height, every coefficient worked in the wind load cases.';
-  const blocks: Block[] = [...templateBlocks('loads', { pressureBasis }).blocks];
+  const blocks: Block[] = [...templateBlocks('loads', { pressuresAsGiven: w.speed === null || typed }).blocks];
   const pressureText = (p: number | null): string => (p === null ? 'from the wind speed, by height (below)' : `${d.q(p, 'pressure')} (input)`);
 
   blocks.push({
@@ -88,9 +86,9 @@ export function loadsSection(loaded: LoadedDesign): DocSection {
       rows: [
         [`Basic wind speed V (${s.basis})`, d.q(s.V_mps, 'speed')],
         ['Exposure category', s.exposure],
-        ['Directionality factor Kd (dimensionless)', String(s.Kd)],
-        ['Gust effect factor G (dimensionless)', String(s.G)],
-        ['Factor Cv on V d in the drag of round tubes (dimensionless)', String(s.Cv)],
+        ['Directionality factor Kd (dimensionless)', formatNumber(s.Kd)],
+        ['Gust effect factor G (dimensionless)', formatNumber(s.G)],
+        ['Factor Cv on V d in the drag of round tubes (dimensionless)', formatNumber(s.Cv)],
       ],
       note: 'Sources of the defaults are in the assumptions table of the criteria section; Kz and the drag coefficients are computed in the wind load cases.',
     });
@@ -144,5 +142,5 @@ export function loadsSection(loaded: LoadedDesign): DocSection {
     note: 'Load factors are dimensionless; "–" means the load does not enter the combination. Combinations are analysed as combined loads, each as its own analysis.',
   });
 
-  return { id: 'loads', title: LOADS_TITLE, blocks };
+  return withUnbrokenIds([{ id: 'loads', title: LOADS_TITLE, blocks }], design.combinations.map((c) => c.id))[0]!;
 }

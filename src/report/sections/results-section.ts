@@ -8,14 +8,14 @@ import { envelope, extremeExtent, resultsOf } from '../../analysis/envelope.ts';
 import type { LoadedDesign } from '../../design/design.ts';
 import type { Combination } from '../../loads/load-types.ts';
 import type { FrameModel, Vec3 } from '../../model/frame.ts';
-import { formatNumber } from '../../units/units.ts';
+import { formatNumber, formatPercent, formatTolerance } from '../../units/units.ts';
 import type { Block, DocSection } from '../document.ts';
 import { isFactored } from '../../design/combination-use.ts';
 import { display, fractionText, memberText, type Display } from './display.ts';
 import { largeMovements, SMALL_DISPLACEMENT_LIMIT, worstPerMember } from '../../analysis/displacement-range.ts';
 import { templateBlocks } from './templates.ts';
 import { vecText } from './vector-text.ts';
-import { ROUND_OFF, withoutRoundOff } from './round-off.ts';
+import { ROUND_OFF, roundOffShare, withoutRoundOff } from './round-off.ts';
 
 export const RESULTS_TITLE = 'Analysis results';
 
@@ -49,15 +49,15 @@ function summaryBlocks(analysis: DesignAnalysis, d: Display): Block[] {
       kind: 'table',
       title: second ? 'Second-order iteration and base moment amplification' : 'Base moment (first-order analysis)',
       header: ['Combination', 'Solutions', 'Last change', 'Residual', 'Base moment, 1st order', 'Base moment, final', 'Amplification'],
-      widths: [112, 48, 46, 46, '*', '*', 66],
+      widths: [104, 48, 58, 58, '*', '*', 66],
       rows: analysis.combinations.map((c) => {
         const r = resultOf(analysis, c);
         const b = r.baseMoment;
         return [
           c.id,
           `${r.iterations}`,
-          r.secondOrder ? r.convergence.change.toExponential(1) : '–',
-          r.secondOrder ? r.convergence.residual.toExponential(1) : '–',
+          r.secondOrder ? formatTolerance(r.convergence.change) : '–',
+          r.secondOrder ? formatTolerance(r.convergence.residual) : '–',
           b ? d.q(b.firstOrder_Nm, 'moment') : '–',
           b ? d.q(b.final_Nm, 'moment') : '–',
           b && b.amplification !== null ? formatNumber(b.amplification, 4) : '–',
@@ -135,14 +135,17 @@ function reactionRows(analysis: DesignAnalysis, list: readonly Combination[], d:
   const bigM = Math.max(bigF * height, ...forces.flatMap((f) => [f[3], f[4], f[5]].map(Math.abs)));
   return list.map((c, k) => {
     const f = forces[k]!;
-    return [c.id, ...vecText([f[0], f[1], f[2]], 'force', d, bigF), ...vecText([f[3], f[4], f[5]], 'moment', d, bigM)];
+    const noise = roundOffShare(analysis.options);
+    return [c.id, ...vecText([f[0], f[1], f[2]], 'force', d, bigF, noise), ...vecText([f[3], f[4], f[5]], 'moment', d, bigM, noise)];
   });
 }
 
 function reactionBlocks(analysis: DesignAnalysis, d: Display): Block[] {
   const header = ['Combination', 'Fx', 'Fy', 'Fz', 'Mx', 'My', 'Mz'];
   const widths = [118, '*', '*', '*', '*', '*', '*'] as const;
-  const note = 'Forces and moments exerted by the support on the structure at the centre of the pole base, global axes. The foundation receives the same values with opposite signs.';
+  const note =
+    'Forces and moments exerted by the support on the structure at the centre of the pole base, global axes. The foundation receives the same values with opposite signs. ' +
+    `A value within ${formatTolerance(roundOffShare(analysis.options))} of the largest force, or of the largest moment or that force times the height, in its table prints as 0.`;
   const groups: { title: string; list: Combination[] }[] = [
     { title: 'Base reactions, factored combinations (strength and extreme)', list: analysis.combinations.filter((c) => isFactored(c.category)) },
     { title: 'Base reactions, service combinations (unfactored)', list: analysis.combinations.filter((c) => c.category === 'service') },
@@ -164,14 +167,11 @@ const componentLines = (xyz: readonly string[]): string => xyz.map((v, k) => `${
 
 function staticsBlocks(analysis: DesignAnalysis, d: Display): Block[] {
   const deformed = analysis.options.secondOrder;
-  const configurationText = deformed
-    ? 'In this second-order analysis the check is made in the deformed configuration: loads and supports at their displaced positions, so it also shows how closely the second-order equilibrium is met.'
-    : 'In this first-order analysis the check is made on the undeformed structure.';
   const rows = analysis.combinations.map((c) => resultOf(analysis, c));
-  const share = (v: number | null) => (v === null ? '–' : `${formatNumber(v * 100, 3)} %`);
+  const share = (v: number | null) => (v === null ? '–' : formatPercent(v));
   const blocks: Block[] = [
     { kind: 'heading', level: 2, text: 'Statics check' },
-    ...templateBlocks('statics-check', { configurationText }).blocks,
+    ...templateBlocks('statics-check', { deformed }).blocks,
     { kind: 'paragraph', text: `The sums and residuals of every combination are tabled in the appendix "${STATICS_TABLES_TITLE}".` },
   ];
   const worstBy = (key: (r: CombinationResult) => number) => rows.reduce((a, b) => (key(b) > key(a) ? b : a));
@@ -182,34 +182,43 @@ function staticsBlocks(analysis: DesignAnalysis, d: Display): Block[] {
       kind: 'caution',
       title: 'Force balance not met',
       text:
-        `Under combination ${wf.combination} the reactions do not balance the applied forces: relative force residual ${wf.statics.relativeForceResidual.toExponential(2)}, ` +
+        `Under combination ${wf.combination} the reactions do not balance the applied forces: relative force residual ${formatTolerance(wf.statics.relativeForceResidual)}, ` +
         `residual (${vecText(wf.statics.residualForce_N, 'force', d).join(', ')}). The sum of forces balances to round-off in a correct analysis in either configuration; do not use these results before the cause is found.`,
     });
   }
   if (wm.statics.relativeMomentResidual > TINY_RESIDUAL && wm.statics.configuration === 'deformed') {
-    const t = templateBlocks('statics-deformed', {
-      forceResidual: wf.statics.relativeForceResidual.toExponential(2),
-      forceCombination: wf.combination,
-      momentResidual: d.q(Math.hypot(...wm.statics.residualMoment_Nm), 'moment'),
-      momentCombination: wm.combination,
-      momentRelative: wm.statics.relativeMomentResidual.toExponential(2),
-      momentShare: share(wm.statics.momentResidualShare),
-      displacementMoment: d.q(wm.statics.displacementMoment_Nm, 'moment'),
-    });
+    const t = templateBlocks(
+      'statics-deformed',
+      {
+        forceResidual: wf.statics.relativeForceResidual,
+        forceCombination: wf.combination,
+        momentResidual: Math.hypot(...wm.statics.residualMoment_Nm),
+        momentCombination: wm.combination,
+        momentRelative: wm.statics.relativeMomentResidual,
+        momentShare: share(wm.statics.momentResidualShare),
+        displacementMoment: wm.statics.displacementMoment_Nm,
+      },
+      { units: d.units },
+    );
     blocks.push({ kind: 'caution', title: 'Statics residual in the deformed configuration', text: t.blocks.map((b) => (b.kind === 'paragraph' ? b.text : '')).join('\n\n') });
   } else if (wm.statics.relativeMomentResidual > TINY_RESIDUAL) {
     blocks.push({
       kind: 'caution',
       title: 'Moment balance not met',
       text:
-        `Under combination ${wm.combination} the relative moment residual is ${wm.statics.relativeMomentResidual.toExponential(2)} on the undeformed structure, ` +
+        `Under combination ${wm.combination} the relative moment residual is ${formatTolerance(wm.statics.relativeMomentResidual)} on the undeformed structure, ` +
         `residual moment (${vecText(wm.statics.residualMoment_Nm, 'moment', d).join(', ')}). A first-order analysis balances to round-off: do not use these results before the cause is found.`,
     });
   } else {
-    blocks.push({
-      kind: 'paragraph',
-      text: `Equilibrium is met to round-off: the largest relative force residual is ${wf.statics.relativeForceResidual.toExponential(2)} (${wf.combination}) and the largest relative moment residual ${wm.statics.relativeMomentResidual.toExponential(2)} (${wm.combination}), ${wm.statics.configuration} configuration.`,
-    });
+    blocks.push(
+      ...templateBlocks('statics-balanced', {
+        forceResidual: wf.statics.relativeForceResidual,
+        forceCombination: wf.combination,
+        momentResidual: wm.statics.relativeMomentResidual,
+        momentCombination: wm.combination,
+        deformed: wm.statics.configuration === 'deformed',
+      }).blocks,
+    );
   }
   return blocks;
 }
@@ -256,8 +265,8 @@ function envelopeBlocks(analysis: DesignAnalysis, d: Display): Block[] {
       rows,
       note:
         'Member axes and signs as in the section "Structural model" (N > 0 tension). Extremes are exact along each element. ' +
-        `Where the value holds over a length (within ${CONSTANT_SHARE} of the member's largest value of its kind), the place is that length. ` +
-        `A value within ${ROUND_OFF} of the member's largest force or moment is round-off and printed as 0, with no combination named.`,
+        `Where the value holds over a length (within ${formatTolerance(CONSTANT_SHARE)} of the member's largest value of its kind), the place is that length. ` +
+        `A value within ${formatTolerance(ROUND_OFF)} of the member's largest force or moment is round-off and printed as 0, with no combination named.`,
     },
   ];
 }
@@ -279,9 +288,16 @@ function foundationBlocks(analysis: DesignAnalysis, d: Display): Block[] {
       return { id: c.id, M: Math.hypot(f[3], f[4]), V: Math.hypot(f[0], f[1]), P: f[2], T: Math.abs(f[5]) };
     });
     const most = (key: 'M' | 'V' | 'P' | 'T', sign = 1) => rows.reduce((a, b) => (sign * b[key] > sign * a[key] ? b : a));
+    // a value that is round-off (or, in second order, the iteration's noise) next to the largest
+    // force or moment of the table prints as 0, with no combination named
+    const height = Math.max(...analysis.model.nodes.map((n) => Math.abs(n.xyz_m[2])));
+    const bigF = Math.max(...rows.flatMap((r) => [r.V, Math.abs(r.P)]));
+    const bigM = Math.max(bigF * height, ...rows.map((r) => r.M));
+    const noise = roundOffShare(analysis.options);
     const line = (label: string, key: 'M' | 'V' | 'P' | 'T', dim: 'moment' | 'force', sign = 1) => {
       const r = most(key, sign);
-      return [label, d.q(r[key], dim), r.id];
+      const v = withoutRoundOff(r[key], dim === 'moment' ? bigM : bigF, noise);
+      return [label, d.q(v, dim), v === 0 ? '—' : r.id];
     };
     blocks.push({
       kind: 'table',
@@ -295,14 +311,14 @@ function foundationBlocks(analysis: DesignAnalysis, d: Display): Block[] {
         line('Smallest vertical reaction Fz (negative: uplift)', 'P', 'force', -1),
         line('Largest torque T = |Mz|', 'T', 'moment'),
       ],
-      note: 'From the reactions at the pole base (by the support on the structure; the foundation receives them with opposite signs). Each value with the combination that gives it; they need not occur together, and the combination rows above give the values that do.',
+      note: `From the reactions at the pole base (by the support on the structure; the foundation receives them with opposite signs). Each value with the combination that gives it; they need not occur together, and the combination rows above give the values that do. A value within ${formatTolerance(noise)} of the largest force or moment of the table prints as 0, with no combination named.`,
     });
   }
   return blocks;
 }
 
 function modeBlocks(analysis: DesignAnalysis, d: Display): Block[] {
-  const pct = (v: number) => `${formatNumber(withoutRoundOff(v, 1) * 100, 3)} %`;
+  const pct = (v: number) => formatPercent(withoutRoundOff(v, 1));
   const total = (k: 0 | 1 | 2) => analysis.modes.reduce((s, m) => s + m.effectiveMassRatio[k], 0);
   const sum: Vec3 = [total(0), total(1), total(2)];
   return [
@@ -317,7 +333,7 @@ function modeBlocks(analysis: DesignAnalysis, d: Display): Block[] {
         ...analysis.modes.map((m) => [`${m.mode}`, d.q(m.frequency_Hz, 'frequency'), `${formatNumber(m.period_s)} s`, pct(m.effectiveMassRatio[0]), pct(m.effectiveMassRatio[1]), pct(m.effectiveMassRatio[2])]),
         ['Sum', '', '', pct(sum[0]), pct(sum[1]), pct(sum[2])],
       ],
-      note: `Effective mass ratio: effective modal mass in the global direction as a share of the total moving mass; below ${ROUND_OFF} (round-off) it prints as 0.`,
+      note: `Effective mass ratio: effective modal mass in the global direction as a share of the total moving mass; below ${formatTolerance(ROUND_OFF)} (round-off) it prints as 0.`,
     },
   ];
 }
@@ -348,34 +364,42 @@ export function staticsTablesSection(loaded: LoadedDesign, analysis: DesignAnaly
   const d = display(loaded.design.units);
   const deformed = analysis.options.secondOrder;
   const rows = analysis.combinations.map((c) => resultOf(analysis, c));
-  const share = (v: number | null) => (v === null ? '–' : `${formatNumber(v * 100, 3)} %`);
+  const share = (v: number | null) => (v === null ? '–' : formatPercent(v));
+  // Round-off (and, in second order, the iteration's noise) is judged against the whole table:
+  // the largest force, and the largest moment or that force times the height of the structure.
+  const noise = roundOffShare(analysis.options);
+  const height = Math.max(...analysis.model.nodes.map((n) => Math.abs(n.xyz_m[2])));
+  const bigF = Math.max(...rows.flatMap((r) => [...r.statics.appliedForce_N, ...r.statics.reactionForce_N].map(Math.abs)));
+  const bigM = Math.max(bigF * height, ...rows.flatMap((r) => [...r.statics.appliedMoment_Nm, ...r.statics.reactionMoment_Nm].map(Math.abs)));
   const blocks: Block[] = [
     { kind: 'paragraph', text: `The statics check of section "${RESULTS_TITLE}", combination by combination: forces, then moments about the origin.` },
     {
       kind: 'table',
       title: 'Statics check: forces',
       header: ['Combination', 'Applied ΣFx, ΣFy, ΣFz', 'Reactions ΣFx, ΣFy, ΣFz', '|Residual|', 'Relative'],
-      widths: [110, '*', '*', '*', 44],
+      widths: [110, '*', '*', '*', 58],
       rows: rows.map((r) => [
         r.combination,
-        componentLines(vecText(r.statics.appliedForce_N, 'force', d)),
-        componentLines(vecText(r.statics.reactionForce_N, 'force', d)),
-        d.q(Math.hypot(...r.statics.residualForce_N), 'force'),
-        r.statics.relativeForceResidual.toExponential(1),
+        componentLines(vecText(r.statics.appliedForce_N, 'force', d, bigF, noise)),
+        componentLines(vecText(r.statics.reactionForce_N, 'force', d, bigF, noise)),
+        d.q(withoutRoundOff(Math.hypot(...r.statics.residualForce_N), bigF, noise), 'force'),
+        formatTolerance(r.statics.relativeForceResidual),
       ]),
-      note: `Configuration of the check: ${deformed ? 'deformed' : 'undeformed'}. Relative: |residual force| / Σ|applied forces| (dimensionless).`,
+      note:
+        `Configuration of the check: ${deformed ? 'deformed' : 'undeformed'}. Relative: |residual force| / Σ|applied forces| (dimensionless). ` +
+        `A force or moment within ${formatTolerance(noise)} of the largest of its kind in these two tables prints as 0 (${deformed ? 'the P-delta iteration tolerance: below it a value is the iteration\'s noise' : 'round-off'}); the relative residuals are computed from the values before rounding.`,
     },
     {
       kind: 'table',
       title: 'Statics check: moments about the origin',
       header: ['Combination', 'Applied ΣMx, ΣMy, ΣMz', 'Reactions ΣMx, ΣMy, ΣMz', '|Residual|', 'Relative', ...(deformed ? ['Share'] : [])],
-      widths: [110, '*', '*', '*', 44, ...(deformed ? [52] : [])],
+      widths: [110, '*', '*', '*', 58, ...(deformed ? [52] : [])],
       rows: rows.map((r) => [
         r.combination,
-        componentLines(vecText(r.statics.appliedMoment_Nm, 'moment', d)),
-        componentLines(vecText(r.statics.reactionMoment_Nm, 'moment', d)),
-        d.q(Math.hypot(...r.statics.residualMoment_Nm), 'moment'),
-        r.statics.relativeMomentResidual.toExponential(1),
+        componentLines(vecText(r.statics.appliedMoment_Nm, 'moment', d, bigM, noise)),
+        componentLines(vecText(r.statics.reactionMoment_Nm, 'moment', d, bigM, noise)),
+        d.q(withoutRoundOff(Math.hypot(...r.statics.residualMoment_Nm), bigM, noise), 'moment'),
+        formatTolerance(r.statics.relativeMomentResidual),
         ...(deformed ? [share(r.statics.momentResidualShare)] : []),
       ]),
       note:

@@ -8,7 +8,7 @@ import { INPUT_ECHO_ID } from './input-echo-section.ts';
 import type { CheckResults } from '../../checks/check-types.ts';
 import { CHECK_ORDER, CHECK_SCOPE, CHECK_TITLES, verdictByType } from '../../checks/verdict.ts';
 import type { CheckType } from '../../checks/check-types.ts';
-import { readTemplate } from './templates.ts';
+import { renderTemplate } from './templates.ts';
 
 export const SCOPE_TITLE = 'Scope and cautions';
 
@@ -60,5 +60,5 @@ function checksNotMade(loaded: LoadedDesign, checks: CheckResults | null): strin
     'base-plate': bolts === null ? noBolts : 'no base plate is given (criteria.basePlate)',
   };
   const absent = CHECK_ORDER.filter((t) => !made.has(t)).map((t) => `- ${CHECK_TITLES[t]}: not checked${why[t] ? ` (${why[t]})` : ''}.`);
-  return [readTemplate('scope-not-checked').trim(), ...absent].join('\n');
+  return [renderTemplate('scope-not-checked', {}).trim(), ...absent].join('\n');
 }

@@ -4,6 +4,7 @@
 import type { CalcStep, Expr } from '../../calc/step.ts';
 import { formatQuantity, type UnitSystem } from '../../units/units.ts';
 import type { Block } from '../document.ts';
+import { cleanSteps } from './round-off.ts';
 
 /** A formula with its values, quantities in the user's units (the same words the step block prints). */
 export function exprText(expr: Expr, units: UnitSystem): string {
@@ -23,7 +24,9 @@ export interface StepsTableOptions {
   readonly sourceRef?: (source: string) => string;
 }
 
-export function stepsTable(title: string, steps: readonly CalcStep[], units: UnitSystem, opts: StepsTableOptions = {}): Block {
+export function stepsTable(title: string, given: readonly CalcStep[], units: UnitSystem, opts: StepsTableOptions = {}): Block {
+  // round-off next to the largest quantity of its kind in the table prints as 0 ("0 kip", not "3.951e-17 kip")
+  const steps = cleanSteps(given);
   if (opts.withoutSources) {
     return {
       kind: 'table',

@@ -7,7 +7,7 @@ import { armLengthShift, memberAxes } from '../../model/member-axes.ts';
 import { segmentConvergence } from '../../model/segment-convergence.ts';
 import { sectionAt } from '../../model/taper.ts';
 import type { TubeProperties } from '../../model/tube-section.ts';
-import { formatNumber, toSI, displayUnit } from '../../units/units.ts';
+import { formatNumber, formatPercent, formatTolerance, toSI, displayUnit } from '../../units/units.ts';
 import { baseText as restraintText } from '../../design/base-text.ts';
 import { conventionsSketch } from '../figures/conventions-sketch.ts';
 import { memberAxesSketch } from '../figures/member-axes-sketch.ts';
@@ -31,13 +31,10 @@ function propertyRow(member: string, end: string, p: TubeProperties, d: Display)
 function methodBlocks(loaded: LoadedDesign, analysis: DesignAnalysis, d: Display): Block[] {
   const o = analysis.options;
   const second = o.secondOrder
-    ? templateBlocks('model-second-order', { tolerance: formatNumber(o.tolerance), maxIterations: String(o.maxIterations) })
+    ? templateBlocks('model-second-order', { tolerance: o.tolerance, maxIterations: o.maxIterations })
     : templateBlocks('model-first-order', {});
   return [
-    ...templateBlocks('model-method', {
-      segments: String(loaded.design.analysis.segmentsPerMember),
-      stationSpacing: d.q(o.stationSpacing_m, 'length'),
-    }).blocks,
+    ...templateBlocks('model-method', { segments: loaded.design.analysis.segmentsPerMember, stationSpacing: o.stationSpacing_m }, { units: d.units }).blocks,
     ...second.blocks,
   ];
 }
@@ -151,7 +148,7 @@ function convergenceBlocks(loaded: LoadedDesign, analysis: DesignAnalysis, d: Di
   const P_N = toSI(1, forceUnit, 'force');
   return [
     { kind: 'heading', level: 2, text: 'Segment convergence' },
-    ...templateBlocks('segment-convergence', { load: d.q(P_N, 'force') }).blocks,
+    ...templateBlocks('segment-convergence', { load: P_N }, { units: d.units }).blocks,
     {
       kind: 'table',
       title: 'Tip deflection under a tip load: elements against the continuous taper',
@@ -162,7 +159,7 @@ function convergenceBlocks(loaded: LoadedDesign, analysis: DesignAnalysis, d: Di
         `${m.elements} elements`,
         d.q(m.chainFlexibility_mPerN * P_N, 'section'),
         d.q(m.continuousFlexibility_mPerN * P_N, 'section'),
-        `${formatNumber(m.relativeDifference * 100, 3)} %`,
+        formatPercent(m.relativeDifference),
       ]),
       note: 'Difference = δ elements / δ continuous − 1. Positive: the chain of elements is slightly more flexible than the taper.',
     },

@@ -1,22 +1,6 @@
-// The text of a PDF in content order (`pdftotext -raw`, poppler-utils): table cells come out
-// one after the other, row by row, which lets a test read the cells of one row even when the
-// layout wrapped them over several lines.
-import { execFileSync } from 'node:child_process';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-
-export function rawPdfText(pdf: Uint8Array): string {
-  const dir = mkdtempSync(join(tmpdir(), 'polebook-raw-'));
-  try {
-    const file = join(dir, 'package.pdf');
-    writeFileSync(file, pdf);
-    return execFileSync('pdftotext', ['-raw', '-enc', 'UTF-8', file, '-'], { encoding: 'utf8' });
-  } finally {
-    rmSync(dir, { recursive: true, force: true });
-  }
-}
-
+// The numbers of one table row, read from a package's text in content order (pdfjs gives table
+// cells one after the other, row by row), which lets a test read the cells of one row even when
+// the layout wrapped them over several lines. Pass the raw page texts joined by form feeds.
 /**
  * The numbers printed in one row of a titled table: the text from the row's id to the next
  * row's id (a line broken after a hyphen is joined again, page headers and footers left out),
@@ -37,10 +21,15 @@ export function rowNumbers(raw: string, tableTitle: string, rowId: string, nextI
   if (!number) throw new Error(`table "${tableTitle}" has no number before its title`);
   const after = raw.slice(t0 + tableTitle.length);
   const end = after.search(new RegExp(`\\n\\f?Table (?!${number.replace('.', '\\.')} )`));
-  const region = (end >= 0 ? after.slice(0, end) : after).split(`Table ${number} ${tableTitle}`).join('').replace(/-\n/g, '-');
+  const region = (end >= 0 ? after.slice(0, end) : after).split(`Table ${number} ${tableTitle}`).join('').replace(/([-@])\n/g, '$1');
   const a = region.indexOf(rowId);
   if (a < 0) throw new Error(`no row ${rowId} in table "${tableTitle}"`);
   const b = region.indexOf(nextId, a + rowId.length);
   const segment = region.slice(a + rowId.length, b > a ? b : undefined);
-  return [...segment.matchAll(/-?\d+(?:\.\d+)?(?:e-?\d+)?/g)].map((m) => Number(m[0]));
+  // a number in engineering notation, "23.39 × 10⁶", is one number
+  return [...segment.matchAll(/(-?\d+(?:\.\d+)?)(?: × 10([⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+))?/g)].map((m) => Number(m[1]) * 10 ** superscriptNumber(m[2] ?? '⁰'));
+}
+
+function superscriptNumber(s: string): number {
+  return Number([...s].map((c) => '⁰¹²³⁴⁵⁶⁷⁸⁹'.indexOf(c) >= 0 ? String('⁰¹²³⁴⁵⁶⁷⁸⁹'.indexOf(c)) : c === '⁻' ? '-' : c).join(''));
 }
