@@ -59,6 +59,8 @@ export function loadGroups(model: FrameModel, loads: readonly { readonly load: A
   }
   const out: LoadGroup[] = [];
   for (const [source, parts] of bySource) {
+    // A source whose loads are all zero (no wind pressure, a weightless part) has nothing to draw.
+    if (parts.length === 0) continue;
     const F = parts.reduce<Vec3>((s, q) => add(s, q.f), [0, 0, 0]);
     const weight = parts.reduce((s, q) => s + size(q.f), 0);
     const at: Vec3 = weight > 0 ? parts.reduce<Vec3>((s, q) => add(s, scale(q.p, size(q.f) / weight)), [0, 0, 0]) : parts[0]!.p;

@@ -1,9 +1,12 @@
 // The narrative templates (Handlebars, strict, no HTML escaping): a missing value is refused with
 // its key, helpers print quantities with their units, every template in templates/ compiles and is
 // rendered by some section of some package (none left orphaned), blocks are read as before.
-import { readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { parseDocument } from 'yaml';
+import { cli } from '../cli/run-cli.ts';
 import { buildPackage } from '../../src/pipeline.ts';
 import { compileTemplate, parseTemplate, readTemplate, renderTemplate, renderedTemplates } from '../../src/report/sections/templates.ts';
 import { FT_M, KIP_N } from '../../src/units/units.ts';
@@ -71,6 +74,17 @@ describe('templates', () => {
       await buildPackage(join(ROOT, 'examples', example));
     }
     await buildPackage(join(ROOT, 'examples', 'cantilever-sign.yaml'), { firstOrder: true });
+    // an issued revision (its own caution) and a comparison (its notes)
+    const dir = mkdtempSync(join(tmpdir(), 'polebook-templates-'));
+    try {
+      const doc = parseDocument(readFileSync(join(ROOT, 'examples', 'luminaire-twin.yaml'), 'utf8'));
+      doc.setIn(['project', 'revisions', 0, 'issued'], doc.createNode({ engineer: 'A. Engineer', licence: 'L-1' }));
+      writeFileSync(join(dir, 'issued.yaml'), doc.toString());
+      await buildPackage(join(dir, 'issued.yaml'));
+      await cli(['compare', join(ROOT, 'examples', 'luminaire-twin.yaml'), '--vary', 'A1.length=2.5,3 m', '--out', join(dir, 'cmp'), '--quiet'], { cwd: dir });
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
     const unused = TEMPLATE_NAMES.filter((n) => !renderedTemplates().has(n));
     expect(unused).toEqual([]);
   }, 120_000);
