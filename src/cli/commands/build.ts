@@ -9,7 +9,7 @@ import { buildPackage } from '../../pipeline.ts';
 import { writeFilesAtomic } from '../../output/write-atomic.ts';
 import { checkOutputsWritable } from '../../output/check-outputs.ts';
 import { printWarnings } from './print-warnings.ts';
-import { expandInputs, parseShard } from '../../batch/inputs.ts';
+import { expandInputs, INPUT_EXTENSIONS, parseShard } from '../../batch/inputs.ts';
 import { runBatch } from '../../batch/run-batch.ts';
 import { worstExit } from '../../batch/index-files.ts';
 import type { ParsedArgs } from '../args.ts';
@@ -19,8 +19,11 @@ import { workersOption } from './workers-option.ts';
 import { printIndex, writeIndex } from './batch-output.ts';
 import { statSync } from 'node:fs';
 
+/** Several inputs, or one folder. A folder named like an input file (pole.yaml/) was meant as a
+ * file: it gets the single build's "it is a folder" message. */
 function isBatch(positionals: readonly string[], cwd: string): boolean {
   if (positionals.length > 1) return true;
+  if (INPUT_EXTENSIONS.includes(extname(positionals[0]!).toLowerCase())) return false;
   try {
     return statSync(resolve(cwd, positionals[0]!)).isDirectory();
   } catch {
