@@ -87,7 +87,13 @@ export function comparisonDocument(c: Comparison, figures: readonly ChartFigure[
   const noteText = notes.blocks.map((b) => (b.kind === 'paragraph' ? b.text : '')).filter((t) => t !== '').join('\n\n');
   return {
     meta,
-    cover: [cautionBlock(c.base), { kind: 'caution', title: notes.title ?? 'About this comparison', text: noteText }],
+    cover: [
+      { kind: 'heading', level: 3, text: 'Compared' },
+      { kind: 'bullets', items: c.specs.map((s) => `${s.text}: ${s.values.map((v) => v.label).join(', ')}${c.specs.length > 1 ? ' (every combination with the other keys)' : ''}`) },
+      ...picksBlocks(c).slice(1),
+      cautionBlock(c.base),
+      { kind: 'caution', title: notes.title ?? 'About this comparison', text: noteText },
+    ],
     sections: [variedSection(c), tablesSection(c), chartsSection(figures)],
   };
 }
