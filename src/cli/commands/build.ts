@@ -86,7 +86,7 @@ be written, or an earlier package made read-only (chmod a-w) stops the run with 
 
 export const buildCommand: Command = {
   name: 'build',
-  summary: 'analyse an input file and write its calculation package (PDF, optional JSON)',
+  summary: 'analyse an input file and write its calculation package (PDF, optional JSON); several or a folder: a batch with an index',
   help: HELP,
   async run(argv, io) {
     const args = parseArgs(argv, { flags: ['json', 'first-order', 'quiet'], values: ['out', 'shard', 'workers'] });
