@@ -78,10 +78,10 @@ export function indexDocument(index: BatchIndex, env: Readonly<Record<string, st
   const hash = createHash('sha256').update(indexCsv(index)).digest('hex').slice(0, 12);
   const counts = new Map<string, number>();
   for (const r of index.rows) counts.set(r.verdict, (counts.get(r.verdict) ?? 0) + 1);
-  const caution = templateBlocks('caution', { inputFile: 'each input listed', inputHash: 'listed per input' });
+  const caution = templateBlocks('caution', { inputFile: 'of each package listed', inputHash: 'in its row' });
   const cautionText = caution.blocks.map((b) => (b.kind === 'paragraph' ? b.text : '')).filter((t) => t !== '').join('\n\n');
   const blocks: Block[] = [
-    { kind: 'paragraph', text: `${index.rows.length} input${index.rows.length === 1 ? '' : 's'}: ${[...counts.entries()].map(([v, n]) => `${n} ${v.toLowerCase()}`).join(', ')}. Each input that could be built has its own package beside this index; an input refused or unstable has none, and its row says why. Date of this index: the newest package date of the batch${dates.length === 0 ? ' (none was built: SOURCE_DATE_EPOCH or 1970-01-01)' : ''}.` },
+    { kind: 'paragraph', text: `${index.rows.length} input${index.rows.length === 1 ? '' : 's'}: ${[...counts.entries()].map(([v, n]) => `${v.toLowerCase()} ${n}`).join(', ')}. Each input that could be built has its own package beside this index; an input refused or unstable has none, and its row says why. Date of this index: the newest package date of the batch${dates.length === 0 ? ' (none was built: SOURCE_DATE_EPOCH or 1970-01-01)' : ''}.` },
     {
       kind: 'table',
       title: 'Inputs of the batch',

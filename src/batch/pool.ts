@@ -1,7 +1,7 @@
 // Work spread over worker threads when it pays, else run here, one task after another. The
 // tasks and their results are plain data; results come back in the order of the tasks, whatever
 // order the workers finish in, so the output never depends on timing.
-import { availableParallelism } from 'node:os';
+import { availableParallelism, loadavg } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { existsSync } from 'node:fs';
 import { Worker } from 'node:worker_threads';
@@ -23,12 +23,15 @@ export function workerScript(): URL | null {
   return existsSync(fileURLToPath(url)) ? url : null;
 }
 
-/** Threads that pay: starting one costs about the imports of the whole chain (a few tenths of a
- * second, measured by npm run bench), so a thread is worth it only with at least two tasks for it. */
-export function workersFor(taskCount: number, asked: number | null): number {
+/** Threads that pay. A thread starts by importing the whole chain (about 0.8 s, measured) and
+ * runs its first tasks cold, so it must get enough work: `minPerThread` tasks (a comparison's
+ * alternatives take about 0.1 s each, a package about 1 s). And a core busy with other work gives
+ * no speed-up: the cores counted are those the load average leaves free (at least one). */
+export function workersFor(taskCount: number, asked: number | null, minPerThread = 2): number {
   if (asked !== null) return Math.max(1, Math.min(asked, taskCount));
   if (workerScript() === null) return 1;
-  return Math.max(1, Math.min(availableParallelism(), Math.floor(taskCount / 2)));
+  const free = Math.max(1, availableParallelism() - Math.floor(loadavg()[0] ?? 0));
+  return Math.max(1, Math.min(free, Math.floor(taskCount / minPerThread)));
 }
 
 export async function runPool<K extends TaskKind>(kind: K, tasks: readonly TaskOf<K>[], opts: PoolOptions): Promise<ResultOf<K>[]> {

@@ -52,7 +52,12 @@ function chartSpec(c: Comparison, col: Column): TopLevelSpec | null {
   const xEnc = { field: 'x', type: x.numeric ? 'quantitative' : 'ordinal', title: x.title, scale: x.numeric ? { zero: false, nice: false, padding: 8 } : undefined };
   const yTitle = titleWithUnit(col, system);
   const layers: unknown[] = [
-    { data: { values: out }, mark: { type: 'line', color: '#9aa0a6', strokeWidth: 1 }, encoding: { x: xEnc, y: { field: 'y', type: 'quantitative', title: yTitle, scale: { zero: false } }, detail: { field: 'series' } } },
+    {
+      data: { values: out },
+      mark: { type: 'line', color: '#9aa0a6', strokeWidth: 1 },
+      // With a grid, one line per value of the other keys, told apart by their dashes.
+      encoding: { x: xEnc, y: { field: 'y', type: 'quantitative', title: yTitle, scale: { zero: false } }, ...(c.specs.length > 1 ? { strokeDash: { field: 'series', type: 'nominal', legend: { title: null, orient: 'bottom', direction: 'vertical' } } } : { detail: { field: 'series' } }) },
+    },
     {
       data: { values: out },
       mark: { type: 'point', filled: true, size: 36 },

@@ -54,24 +54,23 @@ function tablesSection(c: Comparison): DocSection {
   const mark = (r: CompareRow) => `${r.index}${r.result.status === 'passes' ? '' : ' ✗'}${c.picks.lightest === r ? ' ★' : ''}`;
   const verdictRows = c.rows.map((r) => [mark(r), ...r.values.map((v) => v.label), statusText(r.result.status), r.result.metrics ? formatNumber(r.result.metrics.governing.ratio, 3) : '-', r.result.metrics?.governing.title ?? (r.result.message ?? ''), placeOf(r, system)]);
   const numberCols = COLUMNS.filter((col) => col.key !== 'governingRatio');
+  // A value checked against a limit prints with its limit: "174 / 1500".
   const valueRows = c.rows.map((r) => [
     mark(r),
     ...numberCols.map((col) => {
       const m = r.result.metrics;
       const v = m ? col.value(m) : null;
-      return v === null ? '-' : formatNumber(inUnits(v, col.dim, system), 4);
+      if (v === null) return '-';
+      const l = col.limit && m ? col.limit(m) : null;
+      const text = formatNumber(inUnits(v, col.dim, system), 4);
+      return l === null ? text : `${text} / ${formatNumber(inUnits(l, col.dim, system), 4)}`;
     }),
   ]);
-  const limitRows = c.rows.filter((r) => r.result.metrics).map((r) => {
-    const m = r.result.metrics!;
-    return [mark(r), ...numberCols.filter((col) => col.limit).map((col) => { const v = col.limit!(m); return v === null ? '-' : formatNumber(inUnits(v, col.dim, system), 4); })];
-  });
   const notes = c.rows.filter((r) => r.result.message !== null).map((r) => `No. ${r.index} (${r.label}), ${statusText(r.result.status).toLowerCase()}: ${r.result.message}`);
   const blocks: Block[] = [
     { kind: 'paragraph', text: 'Marks: ✗ the alternative fails at least one check, is unstable or its input is refused; ★ the lightest alternative that passes every check.' },
     { kind: 'table', title: 'Verdict of each alternative', header: ['no.', ...c.specs.map((s) => s.text), 'status', 'governing ratio', 'governing check', 'where, under'], rows: verdictRows, widths: ['auto', ...c.specs.map(() => 'auto' as const), 'auto', 'auto', '*', '*'], note: 'The governing ratio is the largest demand/capacity ratio of the pass/fail checks; a warning (vortex shedding) is not counted in it.' },
-    { kind: 'table', title: 'Forces, movements and weight of each alternative', header: ['no.', ...numberCols.map((col) => titleWithUnit(col, system))], rows: valueRows, note: 'Base moment, shear and torque: largest over the factored combinations. Pole top sway: service combinations. Arm tip deflection: unfactored dead load, the arm nearest its limit. Bolt force: the most loaded anchor bolt, tension or compression as checked. Steel weight: pole and arm tubes only. "-": not made for this structure or alternative.' },
-    { kind: 'table', title: 'Limits the movements and the bolt force are checked against', header: ['no.', ...numberCols.filter((col) => col.limit).map((col) => `${col.title} ${col.limitTitle} (${titleWithUnit(col, system).replace(/^.*\(/, '').replace(/\)$/, '')})`)], rows: limitRows },
+    { kind: 'table', title: 'Forces, movements and weight of each alternative', header: ['no.', ...numberCols.map((col) => (col.limit ? titleWithUnit({ ...col, title: `${col.title} / ${col.limitTitle}` }, system) : titleWithUnit(col, system)))], rows: valueRows, note: 'Base moment, shear and torque: largest over the factored combinations. Pole top sway: service combinations, with its limit. Arm tip deflection: unfactored dead load, the arm nearest its limit, with that limit. Bolt force: the most loaded anchor bolt, tension or compression as checked, with its design strength. Steel weight: pole and arm tubes only. "-": not made for this structure or alternative.' },
     ...(notes.length > 0 ? [{ kind: 'heading', level: 2, text: 'Alternatives without results' } as Block, { kind: 'bullets', items: notes } as Block] : []),
   ];
   return { id: 'alternatives', title: 'Alternatives', blocks };
@@ -89,7 +88,13 @@ export function comparisonDocument(c: Comparison, figures: readonly ChartFigure[
   const noteText = notes.blocks.map((b) => (b.kind === 'paragraph' ? b.text : '')).filter((t) => t !== '').join('\n\n');
   return {
     meta,
-    cover: [cautionBlock(c.base), { kind: 'caution', title: notes.title ?? 'About this comparison', text: noteText }],
+    cover: [
+      { kind: 'heading', level: 3, text: 'Compared' },
+      { kind: 'bullets', items: c.specs.map((s) => `${s.text}: ${s.values.map((v) => v.label).join(', ')}${c.specs.length > 1 ? ' (every combination with the other keys)' : ''}`) },
+      ...picksBlocks(c).slice(1),
+      cautionBlock(c.base),
+      { kind: 'caution', title: notes.title ?? 'About this comparison', text: noteText },
+    ],
     front: [],
     sections: [variedSection(c), tablesSection(c), chartsSection(figures)],
   };

@@ -5,7 +5,7 @@ import { isMap, isScalar, isSeq, type Document, type LineCounter, type Node } fr
 import { EXIT, InputError, PolebookError, type Diagnostic } from '../errors.ts';
 import { formatPath, type InputPath } from '../input/problem.ts';
 import { designJsonSchema } from '../input/index.ts';
-import { resolveInputPath, VaryPathError, type ResolvedPath } from './input-path.ts';
+import { keyUnit, resolveInputPath, VaryPathError, type ResolvedPath } from './input-path.ts';
 import { parseVaryValues, varyValuesFromList, VaryValueError, type VaryValue } from './vary-values.ts';
 
 /** Where a vary came from, to point at a place in it. */
@@ -68,6 +68,13 @@ function resolveOrThrow(origin: VaryOrigin, pathText: string, data: unknown): Re
   return out;
 }
 
+/** A number typed without a unit is in the key's own unit: its label says which ("4 mm"). */
+function labelled(values: readonly VaryValue[], resolved: ResolvedPath, data: unknown): VaryValue[] {
+  const system = (data as { units?: unknown }).units === 'si' ? 'si' : 'us';
+  const unit = keyUnit(resolved.description, system);
+  return values.map((v) => (v.number !== null && v.unit === null && unit ? { ...v, label: `${v.label} ${unit}` } : v));
+}
+
 /** `--vary A1.length=28,32,36 ft` */
 export function varyFromOption(option: string, data: unknown): VarySpec {
   const eq = option.indexOf('=');
@@ -77,7 +84,7 @@ export function varyFromOption(option: string, data: unknown): VarySpec {
   if (text === '') throw new VaryOptionError(option, 0, 'no path before =; expected e.g. A1.length=28,32,36 ft');
   const paths = resolveOrThrow(origin, option.slice(0, eq), data);
   try {
-    return { text, resolved: paths[0]!, paths, values: parseVaryValues(option.slice(eq + 1)), origin };
+    return { text, resolved: paths[0]!, paths, values: labelled(parseVaryValues(option.slice(eq + 1)), paths[0]!, data), origin };
   } catch (err) {
     if (err instanceof VaryValueError) throw varyProblem({ origin }, { col: err.col }, err.message);
     throw err;
@@ -105,7 +112,7 @@ export function varyFromBlock(doc: Document, lines: LineCounter, file: string, d
     const raw = isScalar(valuesNode) ? valuesNode.value : isSeq(valuesNode) ? valuesNode.items.map((n) => (isScalar(n) ? n.value : '')) : '';
     try {
       const values = Array.isArray(raw) ? varyValuesFromList(raw as (number | string)[], raw.map(() => 0)) : typeof raw === 'number' ? varyValuesFromList([raw], [0]) : parseVaryValues(String(raw));
-      return { text, resolved: paths[0]!, paths, values, origin };
+      return { text, resolved: paths[0]!, paths, values: labelled(values, paths[0]!, data), origin };
     } catch (err) {
       if (err instanceof VaryValueError) {
         const k = Array.isArray(raw) ? Math.max(0, raw.findIndex((x) => { try { varyValuesFromList([x as never], [0]); return false; } catch { return true; } })) : 0;

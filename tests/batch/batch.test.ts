@@ -4,6 +4,7 @@
 import { existsSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { spawnSync } from 'node:child_process';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseDocument } from 'yaml';
 import { cli } from '../cli/run-cli.ts';
@@ -118,4 +119,21 @@ describe('batch inputs', () => {
     const rows = csvRows(out);
     expect(rows[1]).toMatch(/^inputs\/nope\.yaml,,BAD INPUT,,,,,2,cannot read the input file inputs\/nope\.yaml: there is no such file$/);
   }, 60_000);
+});
+
+describe('worker threads (compiled command)', () => {
+  // Under the TypeScript sources a batch runs in one thread; the compiled command can use two.
+  const BIN = join(ROOT, 'dist/src/cli/main.js');
+  it('two worker threads write the same packages and index as one', () => {
+    const run = (workers: string) =>
+      spawnSync(process.execPath, [BIN, 'build', 'inputs', '--out', `w${workers}`, '--workers', workers, '--quiet'], { cwd: dir, encoding: 'utf8', env: { ...process.env, ...ENV, NO_COLOR: '1' } });
+    const one = run('1');
+    const two = run('2');
+    expect(two.status).toBe(3);
+    expect(one.status).toBe(3);
+    expect(two.stdout).toBe(one.stdout);
+    const files = readdirSync(join(dir, 'w1')).sort();
+    expect(readdirSync(join(dir, 'w2')).sort()).toEqual(files);
+    for (const f of files) expect(readFileSync(join(dir, 'w2', f)).equals(readFileSync(join(dir, 'w1', f)))).toBe(true);
+  }, 180_000);
 });

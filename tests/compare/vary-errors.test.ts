@@ -101,7 +101,7 @@ describe('the compare block of an input', () => {
     writeFileSync(file, doc.toString());
     const out = join(dir, 'block-good-out');
     const r = await cli(['compare', file, '--out', out, '--quiet'], { env: ENV });
-    expect(r.stdout).toMatch(/1 {2}A1\.section\.wall = 0\.3125: FAILS/);
+    expect(r.stdout).toMatch(/1 {2}A1\.section\.wall = 0\.3125 in: FAILS/);
     expect(r.stdout).toMatch(/2 {2}A1\.section\.wall = 0\.375 in: FAILS/);
     expect(r.code).toBe(1); // no alternative passes (the example fails its fatigue check on purpose)
     const b = await cli(['build', file, '--out', out], { env: ENV });

@@ -9,7 +9,7 @@ import { buildPackage } from '../../pipeline.ts';
 import { writeFilesAtomic } from '../../output/write-atomic.ts';
 import { checkOutputsWritable } from '../../output/check-outputs.ts';
 import { printWarnings } from './print-warnings.ts';
-import { expandInputs, parseShard } from '../../batch/inputs.ts';
+import { expandInputs, INPUT_EXTENSIONS, parseShard } from '../../batch/inputs.ts';
 import { runBatch } from '../../batch/run-batch.ts';
 import { worstExit } from '../../batch/index-files.ts';
 import type { ParsedArgs } from '../args.ts';
@@ -19,8 +19,11 @@ import { workersOption } from './workers-option.ts';
 import { printIndex, writeIndex } from './batch-output.ts';
 import { statSync } from 'node:fs';
 
+/** Several inputs, or one folder. A folder named like an input file (pole.yaml/) was meant as a
+ * file: it gets the single build's "it is a folder" message. */
 function isBatch(positionals: readonly string[], cwd: string): boolean {
   if (positionals.length > 1) return true;
+  if (INPUT_EXTENSIONS.includes(extname(positionals[0]!).toLowerCase())) return false;
   try {
     return statSync(resolve(cwd, positionals[0]!)).isDirectory();
   } catch {
@@ -83,7 +86,7 @@ be written, or an earlier package made read-only (chmod a-w) stops the run with 
 
 export const buildCommand: Command = {
   name: 'build',
-  summary: 'analyse an input file and write its calculation package (PDF, optional JSON)',
+  summary: 'analyse an input file and write its calculation package (PDF, optional JSON); several or a folder: a batch with an index',
   help: HELP,
   async run(argv, io) {
     const args = parseArgs(argv, { flags: ['json', 'first-order', 'quiet'], values: ['out', 'shard', 'workers'] });
