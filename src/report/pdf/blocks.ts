@@ -41,6 +41,9 @@ function fitsWithHeading(next: Block): boolean {
   }
 }
 
+/** Labels of the front pages (revision history, summary): their sub-headings stay in the contents. */
+const FRONT_LABELS = new Set(['R', 'S']);
+
 /** Marks a heading so the page-break rule moves it to the next page when it would sit at a page foot. */
 export const KEEP_WITH_NEXT_LEVEL = 1;
 
@@ -71,7 +74,9 @@ function headingContent(text: string, level: 2 | 3, counter: SectionCounter): Co
   return {
     text: `${number}  ${text}`,
     style: 'h2',
-    tocItem: true,
+    // Appendix sub-headings (one per load case) are in the outline, not the contents: they would
+    // lengthen the contents by a page for what the appendix's own title already says.
+    tocItem: !/^[A-Z]$/.test(counter.label) || FRONT_LABELS.has(counter.label),
     tocMargin: [16, 0, 0, 0],
     tocStyle: { fontSize: 9 },
     ...(counter.outlineParent !== null ? { outline: true, outlineParentId: counter.outlineParent } : {}),
@@ -164,7 +169,8 @@ function tableContent(block: Extract<Block, { kind: 'table' }>, counter: Section
     layout: ruledLayout(1, 1),
   } as Content;
   if (!block.note) return table;
-  return { stack: [table, { text: block.note, style: 'note', margin: [0, 0, 0, 10] }] };
+  // A short table keeps its note on its page (a note alone at the top of a page reads as nothing).
+  return { stack: [table, { text: block.note, style: 'note', margin: [0, 0, 0, 10] }], ...(block.rows.length <= 20 ? { unbreakable: true } : {}) };
 }
 
 function figureContent(block: Extract<Block, { kind: 'figure' }>, counter: SectionCounter): Content {

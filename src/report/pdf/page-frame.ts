@@ -4,6 +4,7 @@
 import type { Content } from 'pdfmake/interfaces.js';
 import type { DocumentMeta } from '../document.ts';
 import { COLOR, PAGE_MARGINS } from './theme.ts';
+import { measureText } from '../charts/text-measure.ts';
 
 const [LEFT, , RIGHT] = PAGE_MARGINS;
 
@@ -29,6 +30,19 @@ export function footerFor(meta: DocumentMeta) {
   });
 }
 
+const FRAME_SIZE = 7.5;
+
+/** "project — structure id" in one line of the header: a long project name is cut with an ellipsis
+ * (the cover prints it whole); the structure id is never cut. */
+function headerName(meta: DocumentMeta, width_pt: number): string {
+  const id = ` — ${meta.structureId}`;
+  const fits = (t: string) => measureText({ fontSize: FRAME_SIZE }, t) <= width_pt;
+  if (fits(`${meta.projectName}${id}`)) return `${meta.projectName}${id}`;
+  let n = meta.projectName.length;
+  while (n > 1 && !fits(`${meta.projectName.slice(0, n).trimEnd()}…${id}`)) n--;
+  return `${meta.projectName.slice(0, n).trimEnd()}…${id}`;
+}
+
 /** No header on the cover: its title block says the same, larger. */
 export function headerFor(meta: DocumentMeta) {
   return (currentPage: number, _pageCount: number, pageSize: { width: number }): Content | null => {
@@ -39,8 +53,8 @@ export function headerFor(meta: DocumentMeta) {
         {
           style: 'frame',
           columns: [
-            { width: '*', text: `${meta.projectName} — ${meta.structureId}` },
-            { width: 'auto', text: meta.status, bold: true, color: COLOR.accent },
+            { width: '*', text: headerName(meta, pageSize.width - LEFT - RIGHT - measureText({ fontSize: FRAME_SIZE, fontWeight: 'bold' }, meta.status) - 12) },
+            { width: 'auto', text: meta.status, bold: true, color: COLOR.accent, noWrap: true },
           ],
         },
         rule(pageSize.width - LEFT - RIGHT, [0, 3, 0, 0]),

@@ -16,7 +16,7 @@ import { freeBodyDiagram, type FreeBodyOptions } from '../figures/free-body.ts';
 import { display, type Display } from './display.ts';
 import { buildScene, mainArm } from './elevation-plan-section.ts';
 import { wholeId } from './check-text.ts';
-import { ROUND_OFF, withoutRoundOff } from './round-off.ts';
+import { ROUND_OFF, roundOffShare, withoutRoundOff } from './round-off.ts';
 import { templateBlocks } from './templates.ts';
 
 export const FREE_BODY_TITLE = 'Free-body diagrams';
@@ -65,7 +65,7 @@ export function freeBodySection(loaded: LoadedDesign, analysis: DesignAnalysis, 
     // A plan only when something acts horizontally (not for a dead-load combination).
     const horizontalLoad = groups.some((g) => Math.hypot(g.force_N[0], g.force_N[1]) > 1e-6 * Math.hypot(...g.force_N));
     if (horizontalLoad) blocks.push({ kind: 'figure', title: `Free body, ${combo.id}, plan`, svg: plan.svg, width_pt: plan.width, caption: 'Looking down, X to the right. Horizontal components of the same loads and of the base reactions (vertical components are in the elevation). To scale.' });
-    blocks.push(loadTable(combo, groups, r.force, d));
+    blocks.push(loadTable(combo, groups, r.force, d, analysis.options));
     for (const arm of design.arms) blocks.push(jointTable(analysis, combo, arm.id, d));
   }
   blocks.push({ kind: 'heading', level: 2, text: 'Load diagrams of the load cases' });
@@ -106,7 +106,7 @@ function jointTable(analysis: DesignAnalysis, combo: Combination, arm: string, d
   const bigM = Math.max(...j.parts.map((p) => Math.hypot(...p.moment_Nm)));
   // Noise of the solution prints as 0: below 1e-9 of the largest part, or in second order below the
   // P-delta tolerance of it (the iteration stops there).
-  const tol = Math.max(ROUND_OFF, analysis.options.secondOrder ? analysis.options.tolerance : 0);
+  const tol = roundOffShare(analysis.options);
   const f = (v: number) => d.q(Math.abs(v) <= tol * bigF ? 0 : v, 'force');
   const m = (v: number) => d.q(Math.abs(v) <= tol * bigM ? 0 : v, 'moment');
   const rows = j.parts.map((p) => [p.what, f(p.force_N[0]), f(p.force_N[1]), f(p.force_N[2]), m(p.moment_Nm[0]), m(p.moment_Nm[1]), m(p.moment_Nm[2])]);
@@ -121,11 +121,11 @@ function jointTable(analysis: DesignAnalysis, combo: Combination, arm: string, d
   };
 }
 
-function loadTable(combo: Combination, groups: readonly LoadGroup[], reaction: readonly number[], d: Display): Block {
+function loadTable(combo: Combination, groups: readonly LoadGroup[], reaction: readonly number[], d: Display, analysisOptions: { readonly secondOrder: boolean; readonly tolerance: number }): Block {
   const sum = [0, 0, 0];
   for (const g of groups) for (let k = 0; k < 3; k++) sum[k] += g.force_N[k];
   const big = Math.max(...groups.flatMap((g) => g.force_N.map(Math.abs)), ...reaction.slice(0, 3).map(Math.abs));
-  const f = (v: number) => d.q(withoutRoundOff(v, big), 'force');
+  const f = (v: number) => d.q(withoutRoundOff(v, big, roundOffShare(analysisOptions)), 'force');
   const len = (v: number) => d.q(v, 'length');
   const rows = groups
     .filter((g) => Math.hypot(...g.force_N) > 0)

@@ -14,7 +14,7 @@ import { elevationDrawing } from '../figures/structure-drawing.ts';
 import { display, type Display } from './display.ts';
 import { buildScene, mainArm } from './elevation-plan-section.ts';
 import { checkPlaceText, checkRatioText, STATUS_TEXT, wholeId } from './check-text.ts';
-import { withoutRoundOff } from './round-off.ts';
+import { roundOffShare, withoutRoundOff } from './round-off.ts';
 
 export const SUMMARY_ID = 'summary';
 export const SUMMARY_TITLE = 'Summary';
@@ -98,8 +98,10 @@ function reactionBlocks(analysis: DesignAnalysis, d: Display, resultsTitle: stri
   const height = Math.max(...analysis.model.nodes.map((n) => Math.abs(n.xyz_m[2])));
   const bigF = Math.max(0, ...all.flatMap((f) => [f[0], f[1], f[2]].map(Math.abs)));
   const bigM = Math.max(bigF * height, ...all.flatMap((f) => [f[3], f[4], f[5]].map(Math.abs)));
-  const force = (v: number) => d.q(withoutRoundOff(v, bigF), 'force');
-  const moment = (v: number) => d.q(withoutRoundOff(v, bigM), 'moment');
+  // In second order the iteration's noise (the P-delta tolerance) prints as 0 too.
+  const noise = roundOffShare(analysis.options);
+  const force = (v: number) => d.q(withoutRoundOff(v, bigF, noise), 'force');
+  const moment = (v: number) => d.q(withoutRoundOff(v, bigM, noise), 'moment');
   for (const [group, list] of groups) {
     // The service axial force is the dead load's, next to the factored one: not repeated.
     const wanted = group === 'Service' ? measures.filter(([name]) => name !== 'axial') : measures;
