@@ -25,7 +25,7 @@ const MIN_BODY_LINES = 6;
  */
 const KNOWN_SPARSE: Readonly<Record<string, string>> = {
   'signal-support.yaml':
-    'page 48 is blank (only the running header and footer) after the table of combination sources, and page 97 holds a single calculation step (the taper of arm LA) at the end of the vortex check',
+    'one page holds a single calculation step (the taper of arm LA) at the end of the vortex check',
 };
 
 const bodyLines = (page: string): string[] => page.split('\n').filter((l) => l.trim() !== '').slice(1, -1);

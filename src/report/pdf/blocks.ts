@@ -169,8 +169,13 @@ function tableContent(block: Extract<Block, { kind: 'table' }>, counter: Section
     layout: ruledLayout(1, 1),
   } as Content;
   if (!block.note) return table;
-  // A short table keeps its note on its page (a note alone at the top of a page reads as nothing).
-  return { stack: [table, { text: block.note, style: 'note', margin: [0, 0, 0, 10] }], ...(block.rows.length <= 20 ? { unbreakable: true } : {}) };
+  // A note alone at the top of a page reads as nothing: a short table (a dozen lines of cells at
+  // most, well under a page) keeps its note with it; a longer one, which may break, prints its
+  // note above it. (Unbreakable content taller than a page would be cut.)
+  const lines = block.rows.reduce((sum, row) => sum + Math.max(1, ...row.map((c) => c.split('\n').length)), 0);
+  const note: Content = { text: block.note, style: 'note', margin: [0, 0, 0, 10] };
+  if (lines <= 12) return { stack: [table, note], unbreakable: true } as Content;
+  return { stack: [{ ...(note as object), margin: [0, 2, 0, 0] } as Content, table] };
 }
 
 function figureContent(block: Extract<Block, { kind: 'figure' }>, counter: SectionCounter): Content {
