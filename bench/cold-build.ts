@@ -16,6 +16,7 @@ interface Phases {
   input: number;
   analysis: number;
   checks: number;
+  charts: number;
   document: number;
   layout: number;
   write: number;
@@ -34,7 +35,7 @@ export function printColdBuilds(): void {
   const dir = mkdtempSync(join(tmpdir(), 'polebook-cold-'));
   try {
     console.log(`\nCold build of each example's package (fresh node process each, median of ${RUNS}; target: largest under 2.0 s, peak memory under 250 MB)`);
-    console.log('example                 pages   wall ms  imports  input  analysis  checks  document  layout  write   peak MB');
+    console.log('example                 pages   wall ms  imports  input  analysis  checks  charts  document  layout  write   peak MB');
     const examples = readdirSync(join(packageRoot(), 'examples')).filter((f) => f.endsWith('.yaml')).sort();
     for (const f of examples) {
       const walls: number[] = [];
@@ -46,10 +47,10 @@ export function printColdBuilds(): void {
         runs.push(JSON.parse(line.trim().split('\n').at(-1)!) as Phases);
       }
       const m = (key: keyof Phases) => median(runs.map((r) => r[key]));
-      const cols = [m('imports'), m('input'), m('analysis'), m('checks'), m('document'), m('layout'), m('write')].map((v, i) => v.toFixed(0).padStart([8, 6, 9, 7, 9, 7, 6][i]!));
+      const cols = [m('imports'), m('input'), m('analysis'), m('checks'), m('charts'), m('document'), m('layout'), m('write')].map((v, i) => v.toFixed(0).padStart([8, 6, 9, 7, 7, 9, 7, 6][i]!));
       console.log(`${f.padEnd(22)} ${String(m('pages')).padStart(6)} ${median(walls).toFixed(0).padStart(9)} ${cols.join(' ')} ${(m('maxRSS_kB') / 1024).toFixed(0).padStart(9)}`);
     }
-    console.log('Phases inside the process; wall also counts starting Node. The package has no vega charts yet (its diagrams are our own SVG), so there is no charts phase.');
+    console.log('Phases inside the process; wall also counts starting Node. charts: the vega-lite member charts rendered to SVG; document: the document model with our own SVG drawings.');
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

@@ -4,9 +4,6 @@ import { loadDesignFile, loadDesignText } from './input/index.ts';
 import type { LoadedDesign } from './design/design.ts';
 import { analyseDesign } from './analyse-design.ts';
 import type { DesignAnalysis } from './analyse-design.ts';
-import { buildDocument } from './report/sections/build-document.ts';
-import { analysisSections } from './report/sections/analysis-sections.ts';
-import { renderPdf } from './report/pdf/render-pdf.ts';
 import type { DocumentModel } from './report/document.ts';
 import { resultsJson } from './export/results-json.ts';
 import { toolVersion } from './version.ts';
@@ -14,10 +11,6 @@ import { analysisSummaryLines, movementWarningLines } from './analysis-summary.t
 import { runChecks } from './checks/run-checks.ts';
 import type { CheckResults } from './checks/check-types.ts';
 import { checkSummaryLines } from './checks/check-summary.ts';
-import { checkSections, CHECKS_TITLE } from './report/sections/check-sections.ts';
-import { summarySection } from './report/sections/summary-section.ts';
-import { memberCharts } from './report/sections/member-charts.ts';
-import { RESULTS_TITLE } from './report/sections/results-section.ts';
 import { assertPrintable } from './printable-input.ts';
 import { issuedRegisterUpdate, type RegisterUpdate } from './output/issued-register.ts';
 
@@ -81,11 +74,10 @@ export function analyseAndCheck(loaded: LoadedDesign, opts: BuildOptions = {}): 
 export async function packageOf(loaded: LoadedDesign, opts: BuildOptions = {}, checked: CheckedDesign = analyseAndCheck(loaded, opts)): Promise<PackageResult> {
   const { analysis, checks } = checked;
   const issuedRegister = issuedRegisterUpdate(loaded);
-  const summaryPage = summarySection(loaded, analysis, checks, { checks: CHECKS_TITLE, results: RESULTS_TITLE });
-  // vega renders asynchronously: the member charts are made before the (synchronous) document.
-  const charts = await memberCharts(loaded, analysis, checks);
-  const document = buildDocument(loaded, { sections: analysisSections(loaded, analysis, checkSections(loaded, analysis, checks), checks, charts), secondOrder: analysis.options.secondOrder, checks, summary: summaryPage });
-  const pdf = await renderPdf(document);
+  // The renderer is loaded when a package is made: a comparison's alternatives and `check` need
+  // only the engineering modules, so a worker thread starts in half the time.
+  const { packageDocument } = await import('./report/package-document.ts');
+  const { document, pdf } = await packageDocument(loaded, analysis, checks);
   const json = opts.json
     ? resultsJson({ loaded, toolVersion: toolVersion(), ...analysis, secondOrder: analysis.options.secondOrder, checks })
     : null;

@@ -34,41 +34,60 @@ export function workersFor(taskCount: number, asked: number | null, minPerThread
   return Math.max(1, Math.min(free, Math.floor(taskCount / minPerThread)));
 }
 
+/** Tasks sent ahead to a worker, so it never waits for this thread to hand it the next one. */
+const IN_FLIGHT = 2;
+
+/** Lets queued worker messages be handled between tasks run in this thread. */
+const yieldToEvents = (): Promise<void> => new Promise((resolve) => setImmediate(resolve));
+
 export async function runPool<K extends TaskKind>(kind: K, tasks: readonly TaskOf<K>[], opts: PoolOptions): Promise<ResultOf<K>[]> {
   const script = workerScript();
   const threads = script === null ? 1 : Math.min(opts.workers, tasks.length);
   const results: ResultOf<K>[] = new Array(tasks.length);
   let done = 0;
-  if (threads <= 1) {
-    for (const [k, task] of tasks.entries()) {
-      results[k] = await runTask(kind, task);
-      opts.onDone?.(k, ++done, results[k]);
-    }
-    return results;
-  }
   let next = 0;
-  const workers = Array.from({ length: threads }, () => new Worker(script!));
+  let failure: Error | null = null;
+  const finish = (k: number, result: ResultOf<K>) => {
+    results[k] = result;
+    opts.onDone?.(k, ++done, result);
+  };
+  // This thread is one of the threads: it has the modules loaded and its code warm, and the
+  // workers it starts (threads - 1) take tasks as they come free.
+  const workers = Array.from({ length: threads - 1 }, () => new Worker(script!));
+  const workerRuns = workers.map(
+    (w) =>
+      new Promise<void>((resolve, reject) => {
+        let pending = 0;
+        const give = () => {
+          while (pending < IN_FLIGHT && next < tasks.length && failure === null) {
+            const k = next++;
+            pending++;
+            w.postMessage({ index: k, kind, task: tasks[k] });
+          }
+          if (pending === 0) resolve();
+        };
+        w.on('message', (msg: { index: number; ok: boolean; result?: ResultOf<K>; error?: string }) => {
+          pending--;
+          if (!msg.ok) {
+            failure ??= new Error(`worker failed on task ${msg.index + 1}: ${msg.error}`);
+            return reject(failure);
+          }
+          finish(msg.index, msg.result!);
+          give();
+        });
+        w.once('error', (err) => reject((failure ??= err)));
+        give();
+      }),
+  );
+  // A worker's failure is rethrown by Promise.all below; until then it must not count as unhandled.
+  for (const run of workerRuns) run.catch(() => undefined);
   try {
-    await Promise.all(
-      workers.map(
-        (w) =>
-          new Promise<void>((resolve, reject) => {
-            const give = () => {
-              if (next >= tasks.length) return resolve();
-              const k = next++;
-              w.once('message', (msg: { ok: boolean; result?: ResultOf<K>; error?: string }) => {
-                if (!msg.ok) return reject(new Error(`worker failed on task ${k + 1}: ${msg.error}`));
-                results[k] = msg.result!;
-                opts.onDone?.(k, ++done, results[k]);
-                give();
-              });
-              w.postMessage({ kind, task: tasks[k] });
-            };
-            w.once('error', reject);
-            give();
-          }),
-      ),
-    );
+    while (next < tasks.length && failure === null) {
+      const k = next++;
+      finish(k, await runTask(kind, tasks[k]!));
+      if (workers.length > 0) await yieldToEvents();
+    }
+    await Promise.all(workerRuns);
   } finally {
     await Promise.all(workers.map((w) => w.terminate()));
   }

