@@ -49,6 +49,8 @@ export const KEEP_WITH_NEXT_LEVEL = 1;
 
 export function blocksContent(blocks: readonly Block[], counter: SectionCounter): Content[] {
   const out: Content[] = [];
+  // Whether the last item out ends with a calculation step.
+  let afterStep = false;
   for (let i = 0; i < blocks.length; i++) {
     const block = blocks[i];
     if (block.kind === 'heading') {
@@ -56,13 +58,20 @@ export function blocksContent(blocks: readonly Block[], counter: SectionCounter)
       const next = blocks[i + 1];
       if (next !== undefined && fitsWithHeading(next)) {
         out.push({ stack: [heading, blockContent(next, counter)], unbreakable: true });
+        afterStep = next.kind === 'step';
         i++;
       } else {
         out.push({ stack: [heading], headlineLevel: KEEP_WITH_NEXT_LEVEL } as Content);
+        afterStep = false;
       }
       continue;
     }
-    out.push(blockContent(block, counter));
+    const content = blockContent(block, counter);
+    // The last step of a run goes with the one before it, so a page never holds one step alone.
+    const endsRun = block.kind === 'step' && blocks[i + 1]?.kind !== 'step';
+    if (endsRun && afterStep) out.push({ stack: [out.pop()!, content], unbreakable: true });
+    else out.push(content);
+    afterStep = block.kind === 'step';
   }
   return out;
 }
