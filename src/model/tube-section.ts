@@ -42,61 +42,86 @@ function checkWall(D_m: number, t_m: number): void {
   }
 }
 
+/**
+ * The properties with their calculation steps made only when read: a build makes the section at
+ * every station of every member and prints the steps of a few. The steps come from the same
+ * function run again with a collector, so they cannot differ from the values.
+ */
+function withLazySteps(values: Omit<TubeProperties, 'steps'>, collect: (c: StepCollector) => void): TubeProperties {
+  let steps: readonly CalcStep[] | undefined;
+  return {
+    ...values,
+    get steps(): readonly CalcStep[] {
+      if (steps === undefined) {
+        const c = new StepCollector();
+        collect(c);
+        steps = c.steps;
+      }
+      return steps;
+    },
+  };
+}
+
 /** Round tube: exact annulus formulas. */
 export function roundTube(D_m: number, t_m: number): TubeProperties {
   checkWall(D_m, t_m);
-  const c = new StepCollector();
+  return withLazySteps(roundValues(D_m, t_m), (c) => roundValues(D_m, t_m, c));
+}
+
+function roundValues(D_m: number, t_m: number, c?: StepCollector): Omit<TubeProperties, 'steps'> {
   const src = 'geometry of the annulus (exact)';
   const d = D_m - 2 * t_m;
-  c.add({ description: 'Inside diameter', symbol: 'd', formula: 'd = D − 2t', substituted: [qty(D_m, 'section'), ' − 2 × ', qty(t_m, 'section')], result: qty(d, 'section'), source: src });
+  c?.add({ description: 'Inside diameter', symbol: 'd', formula: 'd = D − 2t', substituted: [qty(D_m, 'section'), ' − 2 × ', qty(t_m, 'section')], result: qty(d, 'section'), source: src });
   const A = (Math.PI / 4) * (D_m ** 2 - d ** 2);
-  c.add({ description: 'Steel area', symbol: 'A', formula: 'A = π/4 (D² − d²)', substituted: ['π/4 × ((', qty(D_m, 'section'), ')² − (', qty(d, 'section'), ')²)'], result: qty(A, 'sectionArea'), source: src });
+  c?.add({ description: 'Steel area', symbol: 'A', formula: 'A = π/4 (D² − d²)', substituted: ['π/4 × ((', qty(D_m, 'section'), ')² − (', qty(d, 'section'), ')²)'], result: qty(A, 'sectionArea'), source: src });
   const I = (Math.PI / 64) * (D_m ** 4 - d ** 4);
-  c.add({ description: 'Moment of inertia', symbol: 'I', formula: 'I = π/64 (D⁴ − d⁴)', substituted: ['π/64 × ((', qty(D_m, 'section'), ')⁴ − (', qty(d, 'section'), ')⁴)'], result: qty(I, 'inertia'), source: src });
+  c?.add({ description: 'Moment of inertia', symbol: 'I', formula: 'I = π/64 (D⁴ − d⁴)', substituted: ['π/64 × ((', qty(D_m, 'section'), ')⁴ − (', qty(d, 'section'), ')⁴)'], result: qty(I, 'inertia'), source: src });
   const J = 2 * I;
-  c.add({ description: 'Torsion constant (polar moment of a circular tube)', symbol: 'J', formula: 'J = 2 I', substituted: ['2 × ', qty(I, 'inertia')], result: qty(J, 'inertia'), source: src });
+  c?.add({ description: 'Torsion constant (polar moment of a circular tube)', symbol: 'J', formula: 'J = 2 I', substituted: ['2 × ', qty(I, 'inertia')], result: qty(J, 'inertia'), source: src });
   const cm = D_m / 2;
-  c.add({ description: 'Extreme fibre distance', symbol: 'c', formula: 'c = D/2', substituted: [qty(D_m, 'section'), ' / 2'], result: qty(cm, 'section'), source: src });
+  c?.add({ description: 'Extreme fibre distance', symbol: 'c', formula: 'c = D/2', substituted: [qty(D_m, 'section'), ' / 2'], result: qty(cm, 'section'), source: src });
   const S = I / cm;
-  c.add({ description: 'Section modulus', symbol: 'S', formula: 'S = 2I/D', substituted: ['2 × ', qty(I, 'inertia'), ' / ', qty(D_m, 'section')], result: qty(S, 'modulus'), source: src });
+  c?.add({ description: 'Section modulus', symbol: 'S', formula: 'S = 2I/D', substituted: ['2 × ', qty(I, 'inertia'), ' / ', qty(D_m, 'section')], result: qty(S, 'modulus'), source: src });
   const Z = (D_m ** 3 - d ** 3) / 6;
-  c.add({ description: 'Plastic section modulus', symbol: 'Z', formula: 'Z = (D³ − d³) / 6', substituted: ['((', qty(D_m, 'section'), ')³ − (', qty(d, 'section'), ')³) / 6'], result: qty(Z, 'modulus'), source: src });
+  c?.add({ description: 'Plastic section modulus', symbol: 'Z', formula: 'Z = (D³ − d³) / 6', substituted: ['((', qty(D_m, 'section'), ')³ − (', qty(d, 'section'), ')³) / 6'], result: qty(Z, 'modulus'), source: src });
   const r = Math.sqrt(I / A);
-  c.add({ description: 'Radius of gyration', symbol: 'r', formula: 'r = √(I / A)', substituted: ['√(', qty(I, 'inertia'), ' / ', qty(A, 'sectionArea'), ')'], result: qty(r, 'section'), source: 'definition' });
+  c?.add({ description: 'Radius of gyration', symbol: 'r', formula: 'r = √(I / A)', substituted: ['√(', qty(I, 'inertia'), ' / ', qty(A, 'sectionArea'), ')'], result: qty(r, 'section'), source: 'definition' });
   const Av = A / 2;
-  c.add({ description: 'Shear area', symbol: 'Av', formula: 'Av = A/2', substituted: [qty(A, 'sectionArea'), ' / 2'], result: qty(Av, 'sectionArea'), source: SHEAR_AREA_SOURCE });
-  return { shape: 'round', sides: null, D_m, t_m, A_m2: A, I_m4: I, J_m4: J, c_m: cm, S_m3: S, Z_m3: Z, r_m: r, shearArea_m2: Av, perimeter_m: Math.PI * D_m, steps: c.steps };
+  c?.add({ description: 'Shear area', symbol: 'Av', formula: 'Av = A/2', substituted: [qty(A, 'sectionArea'), ' / 2'], result: qty(Av, 'sectionArea'), source: SHEAR_AREA_SOURCE });
+  return { shape: 'round', sides: null, D_m, t_m, A_m2: A, I_m4: I, J_m4: J, c_m: cm, S_m3: S, Z_m3: Z, r_m: r, shearArea_m2: Av, perimeter_m: Math.PI * D_m };
 }
 
 /** Regular n-sided tube, D across the flats outside, thin-walled formulas on the mid-wall line. */
 export function multisidedTube(sides: number, D_m: number, t_m: number): TubeProperties {
   checkWall(D_m, t_m);
   if (!Number.isInteger(sides) || sides < 3) throw new RangeError(`a multisided tube needs an integer number of sides >= 3; got ${sides}`);
-  const n = sides;
-  const c = new StepCollector();
+  return withLazySteps(multisidedValues(sides, D_m, t_m), (c) => multisidedValues(sides, D_m, t_m, c));
+}
+
+function multisidedValues(n: number, D_m: number, t_m: number, c?: StepCollector): Omit<TubeProperties, 'steps'> {
   const src = 'thin-walled regular polygon: sum of n flat plates on the mid-wall line';
   const tanPn = Math.tan(Math.PI / n);
   const Dm = D_m - t_m;
-  c.add({ description: 'Mid-wall flat-to-flat width', symbol: 'Dm', formula: 'Dm = D − t', substituted: [qty(D_m, 'section'), ' − ', qty(t_m, 'section')], result: qty(Dm, 'section'), source: src });
+  c?.add({ description: 'Mid-wall flat-to-flat width', symbol: 'Dm', formula: 'Dm = D − t', substituted: [qty(D_m, 'section'), ' − ', qty(t_m, 'section')], result: qty(Dm, 'section'), source: src });
   const b = Dm * tanPn;
-  c.add({ description: `Mid-wall side width (${n} sides)`, symbol: 'b', formula: 'b = Dm tan(π/n)', substituted: [qty(Dm, 'section'), ` × tan(π/${n})`], result: qty(b, 'section'), source: src });
+  c?.add({ description: `Mid-wall side width (${n} sides)`, symbol: 'b', formula: 'b = Dm tan(π/n)', substituted: [qty(Dm, 'section'), ` × tan(π/${n})`], result: qty(b, 'section'), source: src });
   const A = n * b * t_m;
-  c.add({ description: 'Steel area', symbol: 'A', formula: 'A = n b t', substituted: [`${n} × `, qty(b, 'section'), ' × ', qty(t_m, 'section')], result: qty(A, 'sectionArea'), source: src });
+  c?.add({ description: 'Steel area', symbol: 'A', formula: 'A = n b t', substituted: [`${n} × `, qty(b, 'section'), ' × ', qty(t_m, 'section')], result: qty(A, 'sectionArea'), source: src });
   const I = n * b * t_m * (Dm ** 2 / 8 + b ** 2 / 24);
-  c.add({ description: 'Moment of inertia (any centroidal axis)', symbol: 'I', formula: 'I = n b t (Dm²/8 + b²/24)', substituted: [`${n} × `, qty(b, 'section'), ' × ', qty(t_m, 'section'), ' × ((', qty(Dm, 'section'), ')²/8 + (', qty(b, 'section'), ')²/24)'], result: qty(I, 'inertia'), source: src });
+  c?.add({ description: 'Moment of inertia (any centroidal axis)', symbol: 'I', formula: 'I = n b t (Dm²/8 + b²/24)', substituted: [`${n} × `, qty(b, 'section'), ' × ', qty(t_m, 'section'), ' × ((', qty(Dm, 'section'), ')²/8 + (', qty(b, 'section'), ')²/24)'], result: qty(I, 'inertia'), source: src });
   const J = (n * b * Dm ** 2 * t_m) / 4;
-  c.add({ description: 'Torsion constant (Bredt, thin closed section: 4 A0² t / perimeter)', symbol: 'J', formula: 'J = n b Dm² t / 4', substituted: [`${n} × `, qty(b, 'section'), ' × (', qty(Dm, 'section'), ')² × ', qty(t_m, 'section'), ' / 4'], result: qty(J, 'inertia'), source: 'Bredt thin-walled closed-section torsion, J = 4 A0² t / s (e.g. Roark, Formulas for Stress and Strain, torsion of thin-walled closed sections; from memory)' });
+  c?.add({ description: 'Torsion constant (Bredt, thin closed section: 4 A0² t / perimeter)', symbol: 'J', formula: 'J = n b Dm² t / 4', substituted: [`${n} × `, qty(b, 'section'), ' × (', qty(Dm, 'section'), ')² × ', qty(t_m, 'section'), ' / 4'], result: qty(J, 'inertia'), source: 'Bredt thin-walled closed-section torsion, J = 4 A0² t / s (e.g. Roark, Formulas for Stress and Strain, torsion of thin-walled closed sections; from memory)' });
   const cm = D_m / 2 / Math.cos(Math.PI / n);
-  c.add({ description: 'Extreme fibre distance (outside corner)', symbol: 'c', formula: 'c = (D/2) / cos(π/n)', substituted: ['(', qty(D_m, 'section'), `/2) / cos(π/${n})`], result: qty(cm, 'section'), source: 'geometry of the regular polygon' });
+  c?.add({ description: 'Extreme fibre distance (outside corner)', symbol: 'c', formula: 'c = (D/2) / cos(π/n)', substituted: ['(', qty(D_m, 'section'), `/2) / cos(π/${n})`], result: qty(cm, 'section'), source: 'geometry of the regular polygon' });
   const S = I / cm;
-  c.add({ description: 'Section modulus at the corner', symbol: 'S', formula: 'S = I / c', substituted: [qty(I, 'inertia'), ' / ', qty(cm, 'section')], result: qty(S, 'modulus'), source: 'definition' });
+  c?.add({ description: 'Section modulus at the corner', symbol: 'S', formula: 'S = I / c', substituted: [qty(I, 'inertia'), ' / ', qty(cm, 'section')], result: qty(S, 'modulus'), source: 'definition' });
   const Z = Math.min(polygonPlasticModulus(n, Dm, t_m, 0), polygonPlasticModulus(n, Dm, t_m, Math.PI / n));
-  c.add({ description: 'Plastic section modulus (smaller of bending toward a flat and toward a corner)', symbol: 'Z', formula: 'Z = Σ t ∫ |y| ds over the n flats on the mid-wall line', substituted: [`${n} flats of `, qty(b, 'section'), ' × ', qty(t_m, 'section'), ' at Dm = ', qty(Dm, 'section')], result: qty(Z, 'modulus'), source: src });
+  c?.add({ description: 'Plastic section modulus (smaller of bending toward a flat and toward a corner)', symbol: 'Z', formula: 'Z = Σ t ∫ |y| ds over the n flats on the mid-wall line', substituted: [`${n} flats of `, qty(b, 'section'), ' × ', qty(t_m, 'section'), ' at Dm = ', qty(Dm, 'section')], result: qty(Z, 'modulus'), source: src });
   const r = Math.sqrt(I / A);
-  c.add({ description: 'Radius of gyration', symbol: 'r', formula: 'r = √(I / A)', substituted: ['√(', qty(I, 'inertia'), ' / ', qty(A, 'sectionArea'), ')'], result: qty(r, 'section'), source: 'definition' });
+  c?.add({ description: 'Radius of gyration', symbol: 'r', formula: 'r = √(I / A)', substituted: ['√(', qty(I, 'inertia'), ' / ', qty(A, 'sectionArea'), ')'], result: qty(r, 'section'), source: 'definition' });
   const Av = A / 2;
-  c.add({ description: 'Shear area', symbol: 'Av', formula: 'Av = A/2', substituted: [qty(A, 'sectionArea'), ' / 2'], result: qty(Av, 'sectionArea'), source: SHEAR_AREA_SOURCE });
-  return { shape: 'multisided', sides: n, D_m, t_m, A_m2: A, I_m4: I, J_m4: J, c_m: cm, S_m3: S, Z_m3: Z, r_m: r, shearArea_m2: Av, perimeter_m: n * D_m * tanPn, steps: c.steps };
+  c?.add({ description: 'Shear area', symbol: 'Av', formula: 'Av = A/2', substituted: [qty(A, 'sectionArea'), ' / 2'], result: qty(Av, 'sectionArea'), source: SHEAR_AREA_SOURCE });
+  return { shape: 'multisided', sides: n, D_m, t_m, A_m2: A, I_m4: I, J_m4: J, c_m: cm, S_m3: S, Z_m3: Z, r_m: r, shearArea_m2: Av, perimeter_m: n * D_m * tanPn };
 }
 
 /**
