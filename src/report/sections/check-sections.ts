@@ -13,7 +13,7 @@ import { display, fractionText, memberText, type Display } from './display.ts';
 import { largeMovements, SMALL_DISPLACEMENT_LIMIT } from '../../analysis/displacement-range.ts';
 import { RESULTS_TITLE } from './results-section.ts';
 import { templateBlocks } from './templates.ts';
-import { checkPlaceText, checkRatioText, STATUS_TEXT } from './check-text.ts';
+import { checkPlaceText, checkRatioText, PLACE_DATUM_NOTE, STATUS_TEXT } from './check-text.ts';
 
 export const CHECKS_TITLE = 'Design checks';
 
@@ -30,7 +30,7 @@ export function checkSections(loaded: LoadedDesign, analysis: DesignAnalysis, ch
     header: ['Check', 'Worst ratio', 'Result', 'Where', 'Combination', 'Records (failing, warnings)'],
     widths: ['*', 44, 40, 80, 90, 62],
     rows: verdict.map((v) => [v.title, ratioText(v.worst), STATUS_TEXT[v.worst.status], placeText(v.worst, d), v.worst.combination ?? '—', `${v.count} (${v.failures}, ${v.warnings})`]),
-    note: 'Ratio = |demand| / capacity; "not made" when the check cannot be made (it fails, with its reason below).',
+    note: `Ratio = |demand| / capacity; "not made" when the check cannot be made (it fails, with its reason below). ${PLACE_DATUM_NOTE}`,
   });
   blocks.push(...outsideMethodBlocks(analysis));
   for (const g of checks.governing) {

@@ -9,6 +9,9 @@ export const STATUS_TEXT: Readonly<Record<CheckRecord['status'], string>> = { ok
 
 export const checkRatioText = (r: CheckRecord): string => (Number.isFinite(r.ratio) ? formatRatio(r.ratio) : 'not made');
 
+/** How the distances in a "Where" column are measured, for the note under the table. */
+export const PLACE_DATUM_NOTE = 'Where: distance up the pole from its base, or along an arm from its root at the pole face (an arm entered from the pole axis reads shorter here by the distance from the axis to the face).';
+
 export function checkPlaceText(r: CheckRecord, d: Display): string {
   const who = memberText(r.member);
   return r.s_m === null ? who : `${who}, ${d.q(r.s_m, 'length')}`;
