@@ -44,6 +44,12 @@ describe.each(EXAMPLES)('the package of examples/%s, read in-process', (example)
     }
   });
 
+  it('fits the summary on page 2, the page after it starting the contents', () => {
+    // The issue's reading order: cover with the revisions, then a one-page summary.
+    expect(text.pages[1]).toMatch(/^\s*\S.*\n+\s*Summary\n/);
+    expect(text.pages[2]!.split('\n').filter((l) => l.trim() !== '')[1]?.trim()).toBe('Contents');
+  });
+
   it('has an outline entry per section, once the PDF has an outline', (ctx) => {
     if (text.outline === null) ctx.skip('the PDF has no outline (bookmarks) yet: issue 9, layout');
     const titles = text.outline!.map((o) => o.title);

@@ -14,6 +14,7 @@ import { loadCasesSections } from './load-cases-section.ts';
 import { resultsSection, staticsTablesSection } from './results-section.ts';
 import { structuralModelSection } from './structural-model-section.ts';
 import { freeBodySection } from './free-body-section.ts';
+import { modelTablesSection } from './model-tables-section.ts';
 import type { CheckResults } from '../../checks/check-types.ts';
 import type { MemberChart } from './member-charts.ts';
 
@@ -31,8 +32,8 @@ export function analysisSections(loaded: LoadedDesign, analysis: DesignAnalysis,
     ...checkSections,
     handCheckSection(loaded, analysis),
     loads.steps,
+    modelTablesSection(loaded, analysis),
     staticsTablesSection(loaded, analysis),
   ];
-  return withUnbrokenIds(sections, printedIds(analysis));
   return withUnbrokenIds(sections, printedIds(analysis));
 }

@@ -11,6 +11,8 @@ export const checkRatioText = (r: CheckRecord): string => (Number.isFinite(r.rat
 
 /** How the distances in a "Where" column are measured, for the note under the table. */
 export const PLACE_DATUM_NOTE = 'Where: distance up the pole from its base, or along an arm from its root at the pole face (an arm entered from the pole axis reads shorter here by the distance from the axis to the face).';
+/** The same, short enough for the one-page summary. */
+export const PLACE_DATUM_SHORT = 'Where: from the base; on an arm, from the pole face.';
 
 export function checkPlaceText(r: CheckRecord, d: Display): string {
   const who = memberText(r.member);

@@ -15,6 +15,7 @@ import type { Block, DocSection } from '../document.ts';
 import { diameterText, display, memberText, shapeText, type Display } from './display.ts';
 import { stepsTable } from './step-table.ts';
 import { templateBlocks } from './templates.ts';
+import { MODEL_TABLES_TITLE } from './model-tables-section.ts';
 
 export const STRUCTURAL_MODEL_TITLE = 'Structural model';
 
@@ -106,7 +107,7 @@ function memberBlocks(loaded: LoadedDesign, analysis: DesignAnalysis, d: Display
       header: ['Member', 'Length', 'Prismatic elements', 'Section at root', 'Section at tip'],
       widths: [50, 50, 58, '*', '*'],
       rows,
-      note: 'Length of the pole: base to top. Length of an arm: pole face to tip, along its axis (an arm entered from the pole axis is shown here from the face; see the input conventions above). The element count includes the extra nodes at attachments and arm connections.',
+      note: `Length of the pole: base to top. Length of an arm: pole face to tip, along its axis (an arm entered from the pole axis is shown here from the face; see the input conventions above). The element count includes the extra nodes at attachments and arm connections. Every node and element in numbers: appendix "${MODEL_TABLES_TITLE}".`,
     },
   ];
 }

@@ -13,7 +13,7 @@ import type { Block, DocSection } from '../document.ts';
 import { elevationDrawing } from '../figures/structure-drawing.ts';
 import { display, type Display } from './display.ts';
 import { buildScene, mainArm } from './elevation-plan-section.ts';
-import { checkPlaceText, checkRatioText, PLACE_DATUM_NOTE, STATUS_TEXT, wholeId } from './check-text.ts';
+import { checkPlaceText, checkRatioText, PLACE_DATUM_SHORT, STATUS_TEXT, wholeId } from './check-text.ts';
 import { roundOffShare, withoutRoundOff } from './round-off.ts';
 
 export const SUMMARY_ID = 'summary';
@@ -45,7 +45,7 @@ export function summarySection(loaded: LoadedDesign, analysis: DesignAnalysis, c
       header: ['Check', 'Ratio', 'Result', 'Where', 'Combination'],
       widths: ['*', 34, 36, 76, 134],
       rows: verdict.map((v) => [v.title, checkRatioText(v.worst), STATUS_TEXT[v.worst.status], checkPlaceText(v.worst, d), wholeId(v.worst.combination ?? '—')]),
-      note: `Ratio = |demand| / capacity. ${PLACE_DATUM_NOTE} Each check is worked in full in section "${where.checks}".`,
+      note: `Ratio = |demand| / capacity, worked in section "${where.checks}". ${PLACE_DATUM_SHORT}`,
     },
     ...reactionBlocks(analysis, d, where.results),
     ...otherResults(checks, analysis, d, where),
@@ -118,7 +118,7 @@ function reactionBlocks(analysis: DesignAnalysis, d: Display, resultsTitle: stri
     {
       kind: 'table',
       title: 'Base reactions for the foundation',
-      header: ['Largest', 'Combination', 'Axial, down +', 'Shear', 'Moment', 'Torque'],
+      header: ['Largest', 'Combination', 'Axial', 'Shear', 'Moment', 'Torque'],
       widths: [84, 134, '*', '*', '*', '*'],
       rows,
       note: `On the foundation at the centre of the pole base: axial force down +, shear and moment as horizontal resultants, torque about the pole axis; each row's forces act together. Every combination by component: section "${resultsTitle}".`,
