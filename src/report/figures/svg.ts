@@ -14,6 +14,12 @@ export const INK = {
   accent: '#24507a',
   fill: '#eaf0f6',
   light: '#9aa0a6',
+  /** Applied loads in the free-body figures. */
+  load: '#b03a2e',
+  /** Reactions and member-end forces in the free-body figures. */
+  reaction: '#1f5f8b',
+  /** Member-end moments in the joint free body. */
+  moment: '#6a3d8f',
 } as const;
 
 /** Coordinates with two decimals; '-0.00' is written as '0.00'. */
