@@ -10,7 +10,8 @@ import { measureText } from '../charts/text-measure.ts';
 import { LABEL_SIZE, placeLabel, segmentRects, type Rect } from './label-place.ts';
 import { boxOf, fitFrame, inView, viewCoords, type Box, type Frame2D, type ViewKind } from './projection.ts';
 import type { Scene } from './structure-drawing.ts';
-import { arrow, circle, doubleArrow, group, INK, line, rect, svgDocument, text } from './svg.ts';
+import { arrow, circle, doubleArrow, INK, line, normalMark, rect, svgDocument, text } from './svg.ts';
+import { viewAxes } from './view-axes.ts';
 
 export interface FreeBodyLoad {
   readonly at: Vec3;
@@ -104,9 +105,7 @@ export function freeBodyDiagram(scene: Scene, loads: readonly FreeBodyLoad[], op
     if (outOfView && view.kind === 'elevation') {
       // Out of the view: a dot (toward the reader) or a cross (away), labelled with that component.
       const r = 3.2;
-      body.push(circle(px, py, r, '#ffffff', { color: LOAD_COLOR, width: 0.9 }));
-      if (v.normal > 0) body.push(circle(px, py, 0.9, LOAD_COLOR));
-      else body.push(line(px - 2.2, py - 2.2, px + 2.2, py + 2.2, { color: LOAD_COLOR, width: 0.8 }), line(px - 2.2, py + 2.2, px + 2.2, py - 2.2, { color: LOAD_COLOR, width: 0.8 }));
+      body.push(normalMark(px, py, v.normal > 0, LOAD_COLOR));
       taken.push([px - r, py - r, px + r, py + r]);
       labels.push({ x: px + 2, y: py, content: `${l.name} ${opts.force(Math.abs(v.normal))}`, color: LOAD_COLOR });
     }
@@ -151,11 +150,9 @@ export function freeBodyDiagram(scene: Scene, loads: readonly FreeBodyLoad[], op
     taken.push([x0, y0, x0 + 40 + measureText({ fontSize: 7 }, opts.windLabel), y0 + 16]);
   }
   // The view's axes, bottom left.
-  const ax = 14;
-  const ay = height - 10;
-  body.push(group([arrow(ax, ay, ax + 18, ay, { width: 0.7, head: 4 }), arrow(ax, ay, ax, ay - 18, { width: 0.7, head: 4 })]));
-  body.push(text(ax + 21, ay + 2.5, opts.axisNames[0], { size: 7 }), text(ax + 3, ay - 21, opts.axisNames[1], { size: 7 }));
-  taken.push([ax - 2, ay - 30, ax + 24 + measureText({ fontSize: 7 }, opts.axisNames[0]), ay + 4]);
+  const axes = viewAxes(14, height - 10, opts.axisNames);
+  body.push(axes.svg);
+  taken.push(axes.box);
   for (const lb of labels) {
     const at = placeLabel(taken, lb.x, lb.y, lb.content, bounds);
     body.push(text(at.x, at.y, lb.content, { size: LABEL_SIZE, color: lb.color, bold: lb.bold }));
