@@ -55,7 +55,8 @@ export function placeLabelNear(taken: Rect[], x: number, y: number, content: str
       const gy = Math.max(r[1] - y, 0, y - r[3]);
       const dist = Math.hypot(gx, gy);
       if (dist < 2 || dist > reach) continue;
-      const behind = toward ? Math.max(0, -(((r[0] + r[2]) / 2 - x) * toward[0] + ((r[1] + r[3]) / 2 - y) * toward[1])) : 0;
+      // How far the rectangle reaches behind the anchor, against `toward`.
+      const behind = toward ? Math.max(0, -Math.min((r[0] - x) * toward[0], (r[2] - x) * toward[0]) - Math.min((r[1] - y) * toward[1], (r[3] - y) * toward[1])) : 0;
       candidates.push({ left: x + dx, base: y + dy, dist: dist + 0.5 * behind });
     }
   }
