@@ -194,7 +194,7 @@ function drawView(stubs: readonly Stub[], size: { F: (v: number) => number; M: (
     else out.svg.push(line(from[0], from[1], p[0], p[1], { color: INK.muted, width: stub.style === 'aside' ? 2 : 0.8, dash: stub.style === 'aside' ? '4 2' : '1.5 1.5' }));
     seg(o, p);
     // The stub's name beside its middle.
-    out.labels.push({ x: o[0] + stub.s[0] * STUB * 0.55, y: o[1] + stub.s[1] * STUB * 0.55, text: stub.style === 'aside' ? `${stub.part.name} (drawn aside)` : stub.part.name, color: INK.muted, part: stub.part.name, kind: 'name', value: 0, toward: null });
+    out.labels.push({ x: o[0] + stub.s[0] * STUB * 0.55, y: o[1] + stub.s[1] * STUB * 0.55, text: stub.style === 'aside' ? `${stub.part.name} (drawn aside)` : stub.part.name, color: INK.muted, part: stub.part.name, kind: 'name', value: 0, toward: stub.s });
     // Rays from the cut end already used (the stub itself, the arrows), so a moment arrow keeps off them.
     const rays: Pt[] = [[-stub.s[0], -stub.s[1]]];
     for (const c of stub.components.filter((c) => c.kind === 'force')) {

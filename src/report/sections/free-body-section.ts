@@ -68,7 +68,9 @@ export function freeBodySection(loaded: LoadedDesign, analysis: DesignAnalysis, 
     const horizontalLoad = groups.some((g) => Math.hypot(g.force_N[0], g.force_N[1]) > 1e-6 * Math.hypot(...g.force_N));
     if (horizontalLoad) blocks.push({ kind: 'figure', title: `Free body, ${combo.id}, plan`, svg: plan.svg, width_pt: plan.width, caption: 'Looking down, X to the right. Horizontal components of the same loads and of the base reactions (vertical components are in the elevation). To scale.' });
     blocks.push(loadTable(combo, groups, r.force, d, analysis.options));
-    for (const arm of design.arms) blocks.push(...jointBlocks(analysis, combo, arm, d));
+    // Arms that meet the pole at one node share one joint: it is drawn once, with the first of them.
+    const drawnWith = new Map<number, string>();
+    for (const arm of design.arms) blocks.push(...jointBlocks(analysis, combo, arm, d, drawnWith));
   }
   blocks.push({ kind: 'heading', level: 2, text: 'Load diagrams of the load cases' });
   blocks.push({ kind: 'paragraph', text: 'Each load case as applied, unfactored, on the elevation; the loads in numbers are in section "Loads" (sums) and in the appendix of load calculation steps.' });
@@ -102,7 +104,7 @@ function shortNamer(ids: readonly string[]): (source: string) => string {
 }
 
 /** The free body of the joint where an arm meets the pole, drawn and in a table: every member end's force and moment on the joint node, and their sum. */
-function jointBlocks(analysis: DesignAnalysis, combo: Combination, arm: Arm, d: Display): Block[] {
+function jointBlocks(analysis: DesignAnalysis, combo: Combination, arm: Arm, d: Display, drawnWith: Map<number, string>): Block[] {
   const j = jointFreeBody(analysis.model, analysis.results[combo.id]!, arm.id, combinedLoads(analysis.cases, combo));
   const bigF = Math.max(...j.parts.map((p) => Math.hypot(...p.force_N)));
   const bigM = Math.max(...j.parts.map((p) => Math.hypot(...p.moment_Nm)));
@@ -113,6 +115,16 @@ function jointBlocks(analysis: DesignAnalysis, combo: Combination, arm: Arm, d: 
   const m = (v: number) => d.q(withoutRoundOff(v, bigM, tol), 'moment');
   const rows = j.parts.map((p) => [p.what, f(p.force_N[0]), f(p.force_N[1]), f(p.force_N[2]), m(p.moment_Nm[0]), m(p.moment_Nm[1]), m(p.moment_Nm[2])]);
   rows.push(['Sum (equilibrium of the joint)', f(j.sumForce_N[0]), f(j.sumForce_N[1]), f(j.sumForce_N[2]), m(j.sumMoment_Nm[0]), m(j.sumMoment_Nm[1]), m(j.sumMoment_Nm[2])]);
+  const table: Block = {
+    kind: 'table',
+    title: `Free body of the joint of arm ${arm.id} and the pole, ${combo.id}`,
+    header: ['On the joint', 'Fx', 'Fy', 'Fz', 'Mx', 'My', 'Mz'],
+    widths: ['*', 46, 46, 46, 54, 54, 54],
+    rows,
+    note: `Global axes; forces and moments that each member end exerts on the joint node (node ${j.node}), moments about the node: the arm's end at the pole face is carried to the node through its rigid offset. They balance: the last row is round-off. Values below ${tol === ROUND_OFF ? '1e-9' : `the P-delta tolerance (${tol})`} of the largest print as 0.${drawnWith.has(j.node) ? ` This joint is drawn above with arm ${drawnWith.get(j.node)!}.` : ''}`,
+  };
+  if (drawnWith.has(j.node)) return [table];
+  drawnWith.set(j.node, arm.id);
   const fig = jointFreeBodyFigure(jointFigureParts(analysis.model, j), {
     arm: arm.id,
     horizontal: [Math.cos(arm.direction_rad), Math.sin(arm.direction_rad), 0],
@@ -131,14 +143,7 @@ function jointBlocks(analysis: DesignAnalysis, combo: Combination, arm: Arm, d: 
       width_pt: fig.width,
       caption: `${views}. Forces (blue) and moments (purple) that the member ends exert on the joint, the values of the table below; moments about the node, right-hand rule (curved arrow counter-clockwise: toward the reader). Stubs schematic; arrows sized per kind against the largest force and the largest moment, not to scale.${names}`,
     },
-    {
-      kind: 'table',
-      title: `Free body of the joint of arm ${arm.id} and the pole, ${combo.id}`,
-      header: ['On the joint', 'Fx', 'Fy', 'Fz', 'Mx', 'My', 'Mz'],
-      widths: ['*', 46, 46, 46, 54, 54, 54],
-      rows,
-      note: `Global axes; forces and moments that each member end exerts on the joint node (node ${j.node}), moments about the node: the arm's end at the pole face is carried to the node through its rigid offset. They balance: the last row is round-off. Values below ${tol === ROUND_OFF ? '1e-9' : `the P-delta tolerance (${tol})`} of the largest print as 0.`,
-    },
+    table,
   ];
 }
 
@@ -176,7 +181,9 @@ function loadTable(combo: Combination, groups: readonly LoadGroup[], reaction: r
   for (const g of groups) for (let k = 0; k < 3; k++) sum[k] += g.force_N[k];
   const big = Math.max(...groups.flatMap((g) => g.force_N.map(Math.abs)), ...reaction.slice(0, 3).map(Math.abs));
   const f = (v: number) => d.q(withoutRoundOff(v, big, roundOffShare(analysisOptions)), 'force');
-  const len = (v: number) => d.q(v, 'length');
+  // A centroid on an axis at 90° comes out as 74 × 10⁻¹⁸ m (cos 90°): round-off of the geometry, printed as 0.
+  const far = Math.max(...groups.flatMap((g) => g.at_m.map(Math.abs)));
+  const len = (v: number) => d.q(withoutRoundOff(v, far), 'length');
   const rows = groups
     .filter((g) => Math.hypot(...g.force_N) > 0)
     .map((g) => [g.source, f(g.force_N[0]), f(g.force_N[1]), f(g.force_N[2]), `${len(g.at_m[0])}, ${len(g.at_m[1])}, ${len(g.at_m[2])}`]);
