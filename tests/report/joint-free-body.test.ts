@@ -224,3 +224,32 @@ for (const file of ['examples/signal-support.yaml', 'examples/cantilever-sign.ya
     });
   });
 }
+
+describe('joints drawn from made-up parts', () => {
+  it('an arm at 30° in plan, a second arm at right angles to it and loads at the node: components named h and n, the end-on arm and the loads drawn aside, all labelled and clear', () => {
+    const c = Math.cos(Math.PI / 6);
+    const s = Math.sin(Math.PI / 6);
+    const parts: JointFigurePart[] = [
+      { name: 'arm A1', toward: [c, s, 0], force_N: [300, -200, -4000], moment_Nm: [-150, 30000, 2500] },
+      { name: 'arm A2', toward: [-s, c, 0], force_N: [100, 150, -1500], moment_Nm: [-9000, -4000, -700] },
+      { name: 'pole below', toward: [0, 0, -1], force_N: [-500, 100, 6200], moment_Nm: [9300, -26500, -1900] },
+      { name: 'loads at the joint', toward: null, force_N: [100, -50, -700], moment_Nm: [-150, 500, 100] },
+    ];
+    const fig = jointFreeBodyFigure(parts, { arm: 'A1', horizontal: [c, s, 0], force: kN, moment: kNm, roundOff: ROUND_OFF, maxHeight: 200 });
+    expect(fig.obliqueNames).toBe(true);
+    expect(fig.views).toEqual(['elevation', 'plan']);
+    const texts = fig.labels.map((l) => l.text);
+    // Along the arm in plan: F·h; normal to it: F·n with n = (h_y, -h_x, 0) (projection.ts); moment about n.
+    const h: Vec3 = [c, s, 0];
+    const n: Vec3 = [s, -c, 0];
+    const a = parts[0]!;
+    const along = (v: Vec3, u: Vec3) => Math.abs(v[0] * u[0] + v[1] * u[1] + v[2] * u[2]);
+    expect(texts).toEqual(expect.arrayContaining([`Fh ${kN(along(a.force_N, h))}`, `Fn ${kN(along(a.force_N, n))}`, `Mn ${kNm(along(a.moment_Nm, n))}`, `Mh ${kNm(along(a.moment_Nm, h))}`]));
+    // The plan keeps the global components.
+    expect(texts).toEqual(expect.arrayContaining([`Fx ${kN(300)}`, `Fy ${kN(200)}`, `Mz ${kNm(2500)}`]));
+    expect(texts).toContain('arm A2 (drawn aside)');
+    expect(texts).toContain('loads at the joint');
+    expect(fig.labels.filter((l) => l.part === 'loads at the joint' && l.kind === 'force').length).toBeGreaterThan(0);
+    expectClean(fig, 'made-up joint');
+  });
+});

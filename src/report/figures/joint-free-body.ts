@@ -8,6 +8,7 @@
 // right-hand rule). The stubs are schematic; arrows are sized per kind against the largest of the
 // kind, not to a scale of the structure. Numbers arrive through the caller's formatters.
 import type { Vec3 } from '../../model/frame.ts';
+import { dot } from '../../model/vec3.ts';
 import { withoutRoundOff } from '../sections/round-off.ts';
 import { LABEL_SIZE, placeLabelNear, segmentRects, type Rect } from './label-place.ts';
 import { inView, type ViewKind } from './projection.ts';
@@ -75,7 +76,6 @@ const ARC_MAX = 12;
 const COS30 = Math.cos(Math.PI / 6);
 const TITLE_SIZE = 7;
 
-const dot = (a: Vec3, b: Vec3): number => a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
 const dot2 = (a: Pt, b: Pt): number => a[0] * b[0] + a[1] * b[1];
 const degOf = (d: Pt): number => (Math.atan2(-d[1], d[0]) * 180) / Math.PI;
 const pageDir = (deg: number): Pt => [Math.cos((deg * Math.PI) / 180), -Math.sin((deg * Math.PI) / 180)];
@@ -151,8 +151,9 @@ function stubsOf(view: JointView, parts: readonly JointFigurePart[], h: Vec3, cl
   const taken = placed.flatMap((p) => (p.s ? [degOf(p.s)] : []));
   for (const p of placed) {
     if (p.s) continue;
-    // Preferred places: the pole below lower left, the pole above upper left, others lower right.
-    const prefer = /below/.test(p.part.name) ? 240 : /above/.test(p.part.name) ? 120 : 300;
+    // Preferred places: a member going down (the pole below) lower left, one going up upper left, others lower right.
+    const up = p.part.toward ? p.part.toward[2] / Math.hypot(...p.part.toward) : 0;
+    const prefer = up < -0.5 ? 240 : up > 0.5 ? 120 : 300;
     let best = 0;
     let bestScore = -Infinity;
     for (let a = 0; a < 360; a += 15) {

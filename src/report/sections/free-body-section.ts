@@ -9,6 +9,7 @@ import type { Arm, LoadedDesign } from '../../design/design.ts';
 import { combinedLoads } from '../../analysis/analyze.ts';
 import { jointFreeBody, type JointFreeBody } from '../../analysis/joint-forces.ts';
 import { localAxes } from '../../loads/load-resultant.ts';
+import { scale } from '../../model/vec3.ts';
 import { loadGroups, type LoadGroup } from '../../loads/load-groups.ts';
 import type { Combination, LoadCase } from '../../loads/load-types.ts';
 import type { FrameElement, FrameModel, Vec3 } from '../../model/frame.ts';
@@ -151,8 +152,7 @@ function jointBlocks(analysis: DesignAnalysis, combo: Combination, arm: Arm, d: 
 export function jointFigureParts(model: FrameModel, j: JointFreeBody): JointFigurePart[] {
   const axisOf = (element: FrameElement | undefined, sign: 1 | -1): Vec3 => {
     if (!element) throw new Error(`joint ${j.node}: no element for a part of its free body`);
-    const x = localAxes(model, element.id).x;
-    return [x[0] * sign, x[1] * sign, x[2] * sign];
+    return scale(localAxes(model, element.id).x, sign);
   };
   return j.parts.map((p) => {
     const arm = /^arm (.+) at its root$/.exec(p.what);
