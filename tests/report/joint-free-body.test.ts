@@ -15,7 +15,8 @@ import { packageRoot } from '../../src/package-root.ts';
 import { jointFreeBodyFigure, type JointFigure, type JointFigurePart } from '../../src/report/figures/joint-free-body.ts';
 import type { Rect } from '../../src/report/figures/label-place.ts';
 import { display } from '../../src/report/sections/display.ts';
-import { jointFigureParts } from '../../src/report/sections/free-body-section.ts';
+import { freeBodySection, jointFigureParts } from '../../src/report/sections/free-body-section.ts';
+import { analyseAndCheck } from '../../src/pipeline.ts';
 import { ROUND_OFF, roundOffShare, withoutRoundOff } from '../../src/report/sections/round-off.ts';
 import { FrameBuilder, nodal, roundTube, type Section } from '../analysis/frame-helpers.ts';
 import { checkXml } from './xml-check.ts';
@@ -251,5 +252,27 @@ describe('joints drawn from made-up parts', () => {
     expect(texts).toContain('loads at the joint');
     expect(fig.labels.filter((l) => l.part === 'loads at the joint' && l.kind === 'force').length).toBeGreaterThan(0);
     expectClean(fig, 'made-up joint');
+  });
+});
+
+describe('the free-body section', () => {
+  it('luminaire-twin (two arms at one node): each combination draws the joint once, before the first table; the second table says where it is drawn', () => {
+    const loaded = { ...loadDesignFile(join(packageRoot(), 'examples/luminaire-twin.yaml')), file: 'examples/luminaire-twin.yaml' };
+    const { analysis, checks } = analyseAndCheck(loaded);
+    const blocks = freeBodySection(loaded, analysis, checks).blocks;
+    const jointFigures = blocks.flatMap((b, k) => (b.kind === 'figure' && b.title.startsWith('Joint of arm') ? [k] : []));
+    const tables = blocks.flatMap((b, k) => (b.kind === 'table' && b.title.startsWith('Free body of the joint') ? [k] : []));
+    expect(tables.length).toBe(2 * jointFigures.length);
+    expect(jointFigures.length).toBeGreaterThan(0);
+    for (const k of jointFigures) {
+      const fig = blocks[k]!;
+      const table = blocks[k + 1]!;
+      if (fig.kind !== 'figure' || table.kind !== 'table') throw new Error('a joint figure is followed by its table');
+      expect(fig.title.replace('Joint of arm', '')).toBe(table.title.replace('Free body of the joint of arm', ''));
+      expect(fig.title.startsWith('Joint of arm A1 ')).toBe(true);
+      checkXml(fig.svg);
+      const second = blocks[k + 2]!;
+      expect(second.kind === 'table' && second.title.startsWith('Free body of the joint of arm A2') && second.note?.includes('drawn above with arm A1')).toBe(true);
+    }
   });
 });

@@ -1,7 +1,8 @@
 // Section "Free-body diagrams": for each combination that governs a check, the whole structure in
 // elevation and plan with every applied load group and the base reactions, drawn to scale, with a
-// table of the same loads so every arrow can be read as numbers; then a load diagram of each load
-// case (unfactored) on the elevation. Reads the loads and results; computes only the sums it prints.
+// table of the same loads so every arrow can be read as numbers, and the free body of each pole-arm
+// joint drawn (figures/joint-free-body.ts) and in a table; then a load diagram of each load case
+// (unfactored) on the elevation. Reads the loads and results; computes only the sums it prints.
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { CheckResults } from '../../checks/check-types.ts';
 import { CHECK_TITLES, verdictByType } from '../../checks/verdict.ts';
