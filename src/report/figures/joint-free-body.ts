@@ -198,6 +198,7 @@ function drawView(stubs: readonly Stub[], size: { F: (v: number) => number; M: (
     out.labels.push({ x: o[0] + stub.s[0] * STUB * 0.55, y: o[1] + stub.s[1] * STUB * 0.55, text: stub.style === 'aside' ? `${stub.part.name} (drawn aside)` : stub.part.name, color: INK.muted, part: stub.part.name, kind: 'name', value: 0, toward: stub.s });
     // Rays from the cut end already used (the stub itself, the arrows), so a moment arrow keeps off them.
     const rays: Pt[] = [[-stub.s[0], -stub.s[1]]];
+    const marked = stub.components.some((c) => c.kind === 'force' && c.how === 'normal');
     for (const c of stub.components.filter((c) => c.kind === 'force')) {
       const color = stub.style === 'applied' ? INK.load : INK.reaction;
       const labelText = `${c.name} ${opts.force(c.value)}`;
@@ -211,8 +212,10 @@ function drawView(stubs: readonly Stub[], size: { F: (v: number) => number; M: (
       // Along the stub and away from the node: the arrow starts at the cut and points on outward;
       // otherwise it ends at the cut (a force toward the node along the stub then lies beyond it).
       const outward = dot2(c.dir, stub.s) > COS30;
-      const a: Pt = outward ? p : [p[0] - c.dir[0] * L, p[1] - c.dir[1] * L];
-      const b: Pt = outward ? [p[0] + c.dir[0] * L, p[1] + c.dir[1] * L] : p;
+      // A dot or cross at the cut: the arrow meets its ring, not its centre.
+      const ring = marked ? 3.4 : 0;
+      const a: Pt = outward ? [p[0] + c.dir[0] * ring, p[1] + c.dir[1] * ring] : [p[0] - c.dir[0] * (L + ring), p[1] - c.dir[1] * (L + ring)];
+      const b: Pt = outward ? [p[0] + c.dir[0] * (L + ring), p[1] + c.dir[1] * (L + ring)] : [p[0] - c.dir[0] * ring, p[1] - c.dir[1] * ring];
       out.svg.push(arrow(a[0], a[1], b[0], b[1], { color, width: 1.1, head: 5 }));
       seg(a, b);
       rays.push(outward ? c.dir : [-c.dir[0], -c.dir[1]]);
@@ -239,7 +242,7 @@ function drawView(stubs: readonly Stub[], size: { F: (v: number) => number; M: (
       // A double-headed arrow from the cut; shifted to the side when it would lie on the stub or an arrow.
       const clash = rays.some((r) => dot2(r, c.dir) > COS30);
       const side: Pt = [-c.dir[1] * 8, c.dir[0] * 8];
-      const a: Pt = clash ? [p[0] + side[0], p[1] + side[1]] : p;
+      const a: Pt = clash ? [p[0] + side[0] + c.dir[0] * 3, p[1] + side[1] + c.dir[1] * 3] : p;
       const b: Pt = [a[0] + c.dir[0] * L, a[1] + c.dir[1] * L];
       out.svg.push(doubleArrow(a[0], a[1], b[0], b[1], { color, width: 1, head: 4.5 }));
       seg(a, b);
