@@ -37,7 +37,9 @@ export interface JointFigureOptions {
   readonly moment: (Nm: number) => string;
   /** A component at or below this share of the largest force (moment) of the joint is round-off: neither drawn nor printed. */
   readonly roundOff: number;
+  /** Of both views together (each takes half); 480 by default. */
   readonly width?: number;
+  /** 200 by default; never less than the drawing needs without its labels. */
   readonly maxHeight?: number;
 }
 
@@ -280,8 +282,10 @@ export function jointFreeBodyFigure(parts: readonly JointFigurePart[], opts: Joi
   const drawn = views.map((v) => drawView(stubsIn(v), size, opts, [0, 0]));
   // One height for both panels: the taller drawing with room for its labels and the panel title.
   const room = 2 * (LABEL_SIZE + 6);
-  const needed = Math.max(...drawn.map((d) => d.box[3] - d.box[1])) + 2 * room + TITLE_SIZE + 6;
-  const height = Math.min(opts.maxHeight ?? 200, Math.max(120, needed));
+  const tallest = Math.max(...drawn.map((d) => d.box[3] - d.box[1]));
+  const needed = tallest + 2 * room + TITLE_SIZE + 6;
+  // maxHeight gives way only to the drawing itself (at most about 160 units tall), never cut.
+  const height = Math.max(Math.min(opts.maxHeight ?? 200, Math.max(120, needed)), tallest + TITLE_SIZE + 12);
   const body: string[] = [rect(0, 0, width, height, '#ffffff')];
   const labels: JointFigureLabel[] = [];
   const hName = axisLetter(h);
