@@ -7,9 +7,11 @@
 // overlaps another or the structure's axis lines.
 import type { Vec3 } from '../../model/frame.ts';
 import { measureText } from '../charts/text-measure.ts';
-import { boxOf, fitFrame, viewCoords, type Box, type Frame2D, type ViewKind } from './projection.ts';
+import { LABEL_SIZE, placeLabel, segmentRects, type Rect } from './label-place.ts';
+import { boxOf, fitFrame, inView, viewCoords, type Box, type Frame2D, type ViewKind } from './projection.ts';
 import type { Scene } from './structure-drawing.ts';
-import { arrow, circle, doubleArrow, group, INK, line, rect, svgDocument, text, type Pt } from './svg.ts';
+import { arrow, circle, doubleArrow, INK, line, normalMark, rect, svgDocument, text } from './svg.ts';
+import { viewAxes } from './view-axes.ts';
 
 export interface FreeBodyLoad {
   readonly at: Vec3;
@@ -36,60 +38,10 @@ export interface FreeBodyOptions {
   readonly maxHeight?: number;
 }
 
-const LOAD_COLOR = '#b03a2e';
-const REACTION_COLOR = '#1f5f8b';
+const LOAD_COLOR = INK.load;
+const REACTION_COLOR = INK.reaction;
 const MAX_ARROW = 62;
 const MIN_ARROW = 16;
-const LABEL_SIZE = 6.8;
-
-type Rect = readonly [number, number, number, number];
-
-const overlaps = (a: Rect, b: Rect): boolean => a[0] < b[2] && b[0] < a[2] && a[1] < b[3] && b[1] < a[3];
-
-/** Page direction of a global vector in the view (unit), and its length in the view. */
-function inView(view: ViewKind, v: Vec3): { d: Pt; len: number; normal: number } {
-  const [u, w] = viewCoords(view, v);
-  const len = Math.hypot(u, w);
-  // The component along the view normal, toward the reader positive: up in plan; in elevation
-  // right x up = (h_y, -h_x, 0), the reader looking along (-h_y, h_x).
-  const normal = view.kind === 'plan' ? v[2] : v[0] * view.horizontal[1] - v[1] * view.horizontal[0];
-  return { d: len > 0 ? [u / len, -w / len] : [0, 0], len, normal };
-}
-
-/** Places a label beside (x, y): the first of a ring of places around it, nearest first, that
- * overlaps nothing placed so far and stays inside the figure. */
-function placeLabel(taken: Rect[], x: number, y: number, content: string, bounds: Rect): { x: number; y: number } {
-  const w = measureText({ fontSize: LABEL_SIZE }, content);
-  const h = LABEL_SIZE + 2;
-  const rectAt = (left: number, base: number): Rect => [left - 1, base - LABEL_SIZE, left + w + 1, base + 2];
-  const candidates: [number, number][] = [];
-  for (let ring = 0; ring < 7; ring++) {
-    const r = ring * h;
-    candidates.push([x + 3, y - 2 - r], [x - w - 3, y - 2 - r], [x + 3, y + LABEL_SIZE + r], [x - w - 3, y + LABEL_SIZE + r], [x - w / 2, y - 4 - r], [x - w / 2, y + LABEL_SIZE + 3 + r]);
-  }
-  for (const [left, base] of candidates) {
-    const r = rectAt(left, base);
-    const inside = r[0] >= bounds[0] && r[2] <= bounds[2] && r[1] >= bounds[1] && r[3] <= bounds[3];
-    if (inside && !taken.some((t) => overlaps(t, r))) {
-      taken.push(r);
-      return { x: left, y: base };
-    }
-  }
-  taken.push(rectAt(x + 3, y - 2));
-  return { x: x + 3, y: y - 2 };
-}
-
-/** Small squares along a drawn segment, so labels keep off it. */
-function segmentRects(a: Pt, b: Pt, half = 2.5): Rect[] {
-  const out: Rect[] = [];
-  const steps = Math.max(1, Math.ceil(Math.hypot(b[0] - a[0], b[1] - a[1]) / 5));
-  for (let k = 0; k <= steps; k++) {
-    const x = a[0] + ((b[0] - a[0]) * k) / steps;
-    const y = a[1] + ((b[1] - a[1]) * k) / steps;
-    out.push([x - half, y - half, x + half, y + half]);
-  }
-  return out;
-}
 
 /** The member axes, so labels keep off the structure. */
 function axisRects(f: Frame2D, scene: Scene): Rect[] {
@@ -153,9 +105,7 @@ export function freeBodyDiagram(scene: Scene, loads: readonly FreeBodyLoad[], op
     if (outOfView && view.kind === 'elevation') {
       // Out of the view: a dot (toward the reader) or a cross (away), labelled with that component.
       const r = 3.2;
-      body.push(circle(px, py, r, '#ffffff', { color: LOAD_COLOR, width: 0.9 }));
-      if (v.normal > 0) body.push(circle(px, py, 0.9, LOAD_COLOR));
-      else body.push(line(px - 2.2, py - 2.2, px + 2.2, py + 2.2, { color: LOAD_COLOR, width: 0.8 }), line(px - 2.2, py + 2.2, px + 2.2, py - 2.2, { color: LOAD_COLOR, width: 0.8 }));
+      body.push(normalMark(px, py, v.normal > 0, LOAD_COLOR));
       taken.push([px - r, py - r, px + r, py + r]);
       labels.push({ x: px + 2, y: py, content: `${l.name} ${opts.force(Math.abs(v.normal))}`, color: LOAD_COLOR });
     }
@@ -200,11 +150,9 @@ export function freeBodyDiagram(scene: Scene, loads: readonly FreeBodyLoad[], op
     taken.push([x0, y0, x0 + 40 + measureText({ fontSize: 7 }, opts.windLabel), y0 + 16]);
   }
   // The view's axes, bottom left.
-  const ax = 14;
-  const ay = height - 10;
-  body.push(group([arrow(ax, ay, ax + 18, ay, { width: 0.7, head: 4 }), arrow(ax, ay, ax, ay - 18, { width: 0.7, head: 4 })]));
-  body.push(text(ax + 21, ay + 2.5, opts.axisNames[0], { size: 7 }), text(ax + 3, ay - 21, opts.axisNames[1], { size: 7 }));
-  taken.push([ax - 2, ay - 30, ax + 24 + measureText({ fontSize: 7 }, opts.axisNames[0]), ay + 4]);
+  const axes = viewAxes(14, height - 10, opts.axisNames);
+  body.push(axes.svg);
+  taken.push(axes.box);
   for (const lb of labels) {
     const at = placeLabel(taken, lb.x, lb.y, lb.content, bounds);
     body.push(text(at.x, at.y, lb.content, { size: LABEL_SIZE, color: lb.color, bold: lb.bold }));

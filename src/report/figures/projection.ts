@@ -13,6 +13,16 @@ export function viewCoords(view: ViewKind, p: Vec3): Pt {
   return [p[0] * h[0] + p[1] * h[1], p[2]];
 }
 
+/** Page direction of a global vector in the view (unit, y down the page), its length in the view,
+ * and its component along the view normal, toward the reader positive: up in plan; in elevation
+ * right x up = (h_y, -h_x, 0), the reader looking along (-h_y, h_x). */
+export function inView(view: ViewKind, v: Vec3): { d: Pt; len: number; normal: number } {
+  const [u, w] = viewCoords(view, v);
+  const len = Math.hypot(u, w);
+  const normal = view.kind === 'plan' ? v[2] : v[0] * view.horizontal[1] - v[1] * view.horizontal[0];
+  return { d: len > 0 ? [u / len, -w / len] : [0, 0], len, normal };
+}
+
 export interface Frame2D {
   /** Drawing units per metre. */
   readonly scale: number;

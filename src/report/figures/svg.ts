@@ -14,6 +14,12 @@ export const INK = {
   accent: '#24507a',
   fill: '#eaf0f6',
   light: '#9aa0a6',
+  /** Applied loads in the free-body figures. */
+  load: '#b03a2e',
+  /** Reactions and member-end forces in the free-body figures. */
+  reaction: '#1f5f8b',
+  /** Member-end moments in the joint free body. */
+  moment: '#6a3d8f',
 } as const;
 
 /** Coordinates with two decimals; '-0.00' is written as '0.00'. */
@@ -127,6 +133,39 @@ export function doubleArrow(x1: number, y1: number, x2: number, y2: number, s: S
   const ux = dx / len;
   const uy = dy / len;
   return arrow(x1, y1, x2, y2, s) + arrowhead(x2 - ux * head * 0.9, y2 - uy * head * 0.9, dx, dy, head, s.color ?? INK.text);
+}
+
+/** A vector along the view normal: a ring with a dot (toward the reader) or a cross (away). */
+export function normalMark(x: number, y: number, towardReader: boolean, color: string): string {
+  const r = 3.2;
+  const ring = circle(x, y, r, '#ffffff', { color, width: 0.9 });
+  if (towardReader) return ring + circle(x, y, 0.9, color);
+  return ring + line(x - 2.2, y - 2.2, x + 2.2, y + 2.2, { color, width: 0.8 }) + line(x - 2.2, y + 2.2, x + 2.2, y - 2.2, { color, width: 0.8 });
+}
+
+/** The points of a circular arc about (cx, cy), angles in degrees counter-clockwise on the page from the right. */
+export function arcPoints(cx: number, cy: number, r: number, fromDeg: number, sweepDeg: number): Pt[] {
+  const steps = Math.max(2, Math.ceil(Math.abs(sweepDeg) / 12));
+  const out: Pt[] = [];
+  for (let k = 0; k <= steps; k++) {
+    const a = ((fromDeg + (sweepDeg * k) / steps) * Math.PI) / 180;
+    out.push([cx + r * Math.cos(a), cy - r * Math.sin(a)]);
+  }
+  return out;
+}
+
+/** A moment about the view normal: an arc about (cx, cy) with a head at its end; a positive sweep
+ * turns counter-clockwise on the page (a moment vector toward the reader, right-hand rule). */
+export function curvedArrow(cx: number, cy: number, r: number, fromDeg: number, sweepDeg: number, s: Stroke & { head?: number } = {}): string {
+  const head = s.head ?? 5;
+  const toDeg = fromDeg + sweepDeg;
+  // The arc stops short of the head's tip, which sits on the arc's end, pointing along its tangent.
+  const shortBy = ((head * 0.8) / r) * (180 / Math.PI) * Math.sign(sweepDeg);
+  const a = (toDeg * Math.PI) / 180;
+  const tip: Pt = [cx + r * Math.cos(a), cy - r * Math.sin(a)];
+  const sign = Math.sign(sweepDeg);
+  const tangent: Pt = [-Math.sin(a) * sign, -Math.cos(a) * sign];
+  return polyline(arcPoints(cx, cy, r, fromDeg, sweepDeg - shortBy), s) + arrowhead(tip[0], tip[1], tangent[0], tangent[1], head, s.color ?? INK.text);
 }
 
 export function group(children: readonly string[], attrs = ''): string {

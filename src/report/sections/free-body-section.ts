@@ -1,18 +1,22 @@
 // Section "Free-body diagrams": for each combination that governs a check, the whole structure in
 // elevation and plan with every applied load group and the base reactions, drawn to scale, with a
-// table of the same loads so every arrow can be read as numbers; then a load diagram of each load
-// case (unfactored) on the elevation. Reads the loads and results; computes only the sums it prints.
+// table of the same loads so every arrow can be read as numbers, and the free body of each pole-arm
+// joint drawn (figures/joint-free-body.ts) and in a table; then a load diagram of each load case
+// (unfactored) on the elevation. Reads the loads and results; computes only the sums it prints.
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { CheckResults } from '../../checks/check-types.ts';
 import { CHECK_TITLES, verdictByType } from '../../checks/verdict.ts';
-import type { LoadedDesign } from '../../design/design.ts';
+import type { Arm, LoadedDesign } from '../../design/design.ts';
 import { combinedLoads } from '../../analysis/analyze.ts';
-import { jointFreeBody } from '../../analysis/joint-forces.ts';
+import { jointFreeBody, type JointFreeBody } from '../../analysis/joint-forces.ts';
+import { localAxes } from '../../loads/load-resultant.ts';
+import { scale } from '../../model/vec3.ts';
 import { loadGroups, type LoadGroup } from '../../loads/load-groups.ts';
 import type { Combination, LoadCase } from '../../loads/load-types.ts';
-import type { Vec3 } from '../../model/frame.ts';
+import type { FrameElement, FrameModel, Vec3 } from '../../model/frame.ts';
 import type { Block, DocSection } from '../document.ts';
 import { freeBodyDiagram, type FreeBodyOptions } from '../figures/free-body.ts';
+import { jointFreeBodyFigure, type JointFigurePart } from '../figures/joint-free-body.ts';
 import { display, type Display } from './display.ts';
 import { buildScene, mainArm } from './elevation-plan-section.ts';
 import { wholeId } from './check-text.ts';
@@ -66,7 +70,9 @@ export function freeBodySection(loaded: LoadedDesign, analysis: DesignAnalysis, 
     const horizontalLoad = groups.some((g) => Math.hypot(g.force_N[0], g.force_N[1]) > 1e-6 * Math.hypot(...g.force_N));
     if (horizontalLoad) blocks.push({ kind: 'figure', title: `Free body, ${combo.id}, plan`, svg: plan.svg, width_pt: plan.width, caption: 'Looking down, X to the right. Horizontal components of the same loads and of the base reactions (vertical components are in the elevation). To scale.' });
     blocks.push(loadTable(combo, groups, r.force, d, analysis.options));
-    for (const arm of design.arms) blocks.push(jointTable(analysis, combo, arm.id, d));
+    // Arms that meet the pole at one node share one joint: it is drawn once, with the first of them.
+    const drawnWith = new Map<number, string>();
+    for (const arm of design.arms) blocks.push(...jointBlocks(analysis, combo, arm, d, drawnWith));
   }
   blocks.push({ kind: 'heading', level: 2, text: 'Load diagrams of the load cases' });
   blocks.push({ kind: 'paragraph', text: 'Each load case as applied, unfactored, on the elevation; the loads in numbers are in section "Loads" (sums) and in the appendix of load calculation steps.' });
@@ -99,26 +105,76 @@ function shortNamer(ids: readonly string[]): (source: string) => string {
   };
 }
 
-/** The free body of the joint where an arm meets the pole: every member end's force and moment on the joint node, and their sum. */
-function jointTable(analysis: DesignAnalysis, combo: Combination, arm: string, d: Display): Block {
-  const j = jointFreeBody(analysis.model, analysis.results[combo.id]!, arm, combinedLoads(analysis.cases, combo));
+/** The free body of the joint where an arm meets the pole, drawn and in a table: every member end's force and moment on the joint node, and their sum. */
+function jointBlocks(analysis: DesignAnalysis, combo: Combination, arm: Arm, d: Display, drawnWith: Map<number, string>): Block[] {
+  const j = jointFreeBody(analysis.model, analysis.results[combo.id]!, arm.id, combinedLoads(analysis.cases, combo));
   const bigF = Math.max(...j.parts.map((p) => Math.hypot(...p.force_N)));
   const bigM = Math.max(...j.parts.map((p) => Math.hypot(...p.moment_Nm)));
   // Noise of the solution prints as 0: below 1e-9 of the largest part, or in second order below the
-  // P-delta tolerance of it (the iteration stops there).
+  // P-delta tolerance of it (the iteration stops there). The drawing leaves the same values out.
   const tol = roundOffShare(analysis.options);
-  const f = (v: number) => d.q(Math.abs(v) <= tol * bigF ? 0 : v, 'force');
-  const m = (v: number) => d.q(Math.abs(v) <= tol * bigM ? 0 : v, 'moment');
+  const f = (v: number) => d.q(withoutRoundOff(v, bigF, tol), 'force');
+  const m = (v: number) => d.q(withoutRoundOff(v, bigM, tol), 'moment');
   const rows = j.parts.map((p) => [p.what, f(p.force_N[0]), f(p.force_N[1]), f(p.force_N[2]), m(p.moment_Nm[0]), m(p.moment_Nm[1]), m(p.moment_Nm[2])]);
   rows.push(['Sum (equilibrium of the joint)', f(j.sumForce_N[0]), f(j.sumForce_N[1]), f(j.sumForce_N[2]), m(j.sumMoment_Nm[0]), m(j.sumMoment_Nm[1]), m(j.sumMoment_Nm[2])]);
-  return {
+  const table: Block = {
     kind: 'table',
-    title: `Free body of the joint of arm ${arm} and the pole, ${combo.id}`,
+    title: `Free body of the joint of arm ${arm.id} and the pole, ${combo.id}`,
     header: ['On the joint', 'Fx', 'Fy', 'Fz', 'Mx', 'My', 'Mz'],
     widths: ['*', 46, 46, 46, 54, 54, 54],
     rows,
-    note: `Global axes; forces and moments that each member end exerts on the joint node (node ${j.node}), moments about the node: the arm's end at the pole face is carried to the node through its rigid offset. They balance: the last row is round-off. Values below ${tol === ROUND_OFF ? '1e-9' : `the P-delta tolerance (${tol})`} of the largest print as 0.`,
+    note: `Global axes; forces and moments that each member end exerts on the joint node (node ${j.node}), moments about the node: the arm's end at the pole face is carried to the node through its rigid offset. They balance: the last row is round-off. Values below ${tol === ROUND_OFF ? '1e-9' : `the P-delta tolerance (${tol})`} of the largest print as 0.${drawnWith.has(j.node) ? ` This joint is drawn above with arm ${drawnWith.get(j.node)!}.` : ''}`,
   };
+  if (drawnWith.has(j.node)) return [table];
+  drawnWith.set(j.node, arm.id);
+  const fig = jointFreeBodyFigure(jointFigureParts(analysis.model, j), {
+    arm: arm.id,
+    horizontal: [Math.cos(arm.direction_rad), Math.sin(arm.direction_rad), 0],
+    force: (N) => d.q(N, 'force'),
+    moment: (Nm) => d.q(Nm, 'moment'),
+    roundOff: tol,
+    maxHeight: 200,
+  });
+  const views = fig.views.length === 2 ? 'Elevation and plan' : 'Elevation only: nothing acts out of its plane';
+  const names = fig.obliqueNames ? ' Components along the arm in plan are named h, normal to it n.' : '';
+  return [
+    {
+      kind: 'figure',
+      title: `Joint of arm ${arm.id} and the pole, ${combo.id}`,
+      svg: fig.svg,
+      width_pt: fig.width,
+      caption: `${views}. Forces (blue) and moments (purple) that the member ends exert on the joint, the values of the table that follows; moments about the node, right-hand rule (curved arrow counter-clockwise: toward the reader). Stubs schematic; arrows sized per kind against the largest force and the largest moment, not to scale.${names}`,
+    },
+    table,
+  ];
+}
+
+/** Each part of the joint free body with its short name and the direction of its member from the node (the member's axis; none for the loads at the node). */
+export function jointFigureParts(model: FrameModel, j: JointFreeBody): JointFigurePart[] {
+  const axisOf = (element: FrameElement | undefined, sign: 1 | -1): Vec3 => {
+    if (!element) throw new Error(`joint ${j.node}: no element for a part of its free body`);
+    return scale(localAxes(model, element.id).x, sign);
+  };
+  return j.parts.map((p) => {
+    const arm = /^arm (.+) at its root$/.exec(p.what);
+    let name: string;
+    let toward: Vec3 | null;
+    if (arm) {
+      const member = model.members.find((mm) => mm.id === arm[1]);
+      name = `arm ${arm[1]}`;
+      toward = axisOf(member ? model.elements[member.elements[0]!] : undefined, 1);
+    } else if (p.what === 'pole below the joint') {
+      name = 'pole below';
+      toward = axisOf(model.elements.find((e) => e.member === 'pole' && e.j === j.node), -1);
+    } else if (p.what === 'pole above the joint') {
+      name = 'pole above';
+      toward = axisOf(model.elements.find((e) => e.member === 'pole' && e.i === j.node), 1);
+    } else if (p.what === 'loads applied at the joint') {
+      name = 'loads at the joint';
+      toward = null;
+    } else throw new Error(`joint ${j.node}: unknown part of its free body "${p.what}"`);
+    return { name, toward, force_N: p.force_N, moment_Nm: p.moment_Nm };
+  });
 }
 
 function loadTable(combo: Combination, groups: readonly LoadGroup[], reaction: readonly number[], d: Display, analysisOptions: { readonly secondOrder: boolean; readonly tolerance: number }): Block {
@@ -126,7 +182,9 @@ function loadTable(combo: Combination, groups: readonly LoadGroup[], reaction: r
   for (const g of groups) for (let k = 0; k < 3; k++) sum[k] += g.force_N[k];
   const big = Math.max(...groups.flatMap((g) => g.force_N.map(Math.abs)), ...reaction.slice(0, 3).map(Math.abs));
   const f = (v: number) => d.q(withoutRoundOff(v, big, roundOffShare(analysisOptions)), 'force');
-  const len = (v: number) => d.q(v, 'length');
+  // A centroid on an axis at 90° comes out as 74 × 10⁻¹⁸ m (cos 90°): round-off of the geometry, printed as 0.
+  const far = Math.max(...groups.flatMap((g) => g.at_m.map(Math.abs)));
+  const len = (v: number) => d.q(withoutRoundOff(v, far), 'length');
   const rows = groups
     .filter((g) => Math.hypot(...g.force_N) > 0)
     .map((g) => [g.source, f(g.force_N[0]), f(g.force_N[1]), f(g.force_N[2]), `${len(g.at_m[0])}, ${len(g.at_m[1])}, ${len(g.at_m[2])}`]);
