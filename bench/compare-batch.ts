@@ -2,6 +2,7 @@
 // with its PDF, under 4 s on a 2-core machine; the analysis and checks of one alternative a small
 // fraction of a full build; a batch of 20 inputs with one and with two worker threads, speed-up
 // printed. Measured and printed only; never asserted. Run alone: node dist/bench/compare-batch.js
+import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -32,7 +33,22 @@ async function compareBench(): Promise<void> {
   const t2 = performance.now();
   console.log(`\nComparison of ${c.rows.length} arm lengths (--vary "${vary}", examples/cantilever-sign.yaml), ${threads} worker thread(s) as chosen at the start:`);
   console.log(`  alternatives analysed and checked ${s(t1 - t0)}, comparison PDF + CSV + JSON ${s(t2 - t1)} (${files[0]!.data.length} bytes of PDF)`);
-  console.log(`  total ${s(t2 - t0)} in this process (the command adds about its start-up); target under 4 s: ${t2 - t0 <= 4000 ? 'met' : 'NOT MET'}; ${load()}`);
+  console.log(`  total ${s(t2 - t0)} in this process; ${load()}`);
+  // The command as a user runs it, from spawn to exit (Node's start, the imports, the writes): median of 3.
+  const out = mkdtempSync(join(tmpdir(), 'polebook-bench-compare-'));
+  try {
+    const bin = join(packageRoot(), 'dist', 'src', 'cli', 'main.js');
+    const walls: number[] = [];
+    for (let k = 0; k < 3; k++) {
+      const a = performance.now();
+      spawnSync(process.execPath, [bin, 'compare', input, '--vary', vary, '--out', out, '--quiet'], { env: { ...process.env, ...ENV }, stdio: 'ignore' });
+      walls.push(performance.now() - a);
+    }
+    const wall = [...walls].sort((a, b) => a - b)[1]!;
+    console.log(`  the command \`polebook compare\` from spawn to exit ${s(wall)} (median of 3, runs ${walls.map((w) => s(w)).join(', ')}); target under 4 s: ${wall <= 4000 ? 'met' : 'NOT MET'}; ${load()}`);
+  } finally {
+    rmSync(out, { recursive: true, force: true });
+  }
 
   // One alternative against a full build of the same input, warm, median of 7.
   const loaded = loadForBuild(input, { env: ENV });

@@ -16,8 +16,9 @@ import { refuseRepeatedKeys, varyFromBlock, varyFromOption, varyProblem, type Va
 import type { VaryValue } from './vary-values.ts';
 
 /** A thread pays for its start-up only with many alternatives: measured on a quiet 2-core machine,
- * 50 alternatives of about 40-60 ms took 5.0 s on one thread and 6.3 s on two (each worker spends
- * about 0.8 s importing and runs its first alternatives cold). */
+ * 50 alternatives of about 40 ms took 4.0-4.1 s through the command on one thread and 4.6 s with a
+ * worker beside this thread (it imports for about 0.3 s and runs its first alternatives cold, and
+ * one thread already keeps about 1.4 cores busy with the collector). */
 export const ALTERNATIVES_PER_THREAD = 40;
 
 export interface CompareRequest {
@@ -93,15 +94,29 @@ function refuseBadValues(specs: readonly VarySpec[], alternatives: readonly Alte
   }
 }
 
-export async function runComparison(req: CompareRequest): Promise<Comparison> {
-  const { base, specs, alternatives, source } = prepareComparison(req);
-  const files = alternatives.map((a) => alternativeFileName(base.file, a.index, alternatives.length));
-  const tasks = alternatives.map((a, k) => ({ text: a.text, file: files[k]!, env: req.env, firstOrder: req.firstOrder, package: req.packages }));
+export type PreparedComparison = ReturnType<typeof prepareComparison>;
+
+/** The comparison from its prepared alternatives and their results, in the order of the
+ * alternatives; the same function wherever the comparison document is made, so a render thread
+ * and this one hold the same comparison. */
+export function comparisonFrom(prepared: PreparedComparison, results: readonly EvaluateResult[], firstOrder: boolean): Comparison {
+  const { base, specs, alternatives, source } = prepared;
+  refuseBadValues(specs, alternatives, results);
+  const rows: CompareRow[] = alternatives.map((a, k) => ({ index: a.index, values: a.values, label: alternativeLabel(specs, a.values), file: alternativeFileName(base.file, a.index, alternatives.length), text: a.text, result: results[k]! }));
+  return { base, specs, rows, picks: picksOf(rows, specs, base.design.arms.map((a) => a.id)), source, secondOrder: base.design.analysis.secondOrder && !firstOrder };
+}
+
+/** The threads the alternatives of `prepared` get under `req`. */
+export function alternativeThreads(prepared: PreparedComparison, req: Pick<CompareRequest, 'workers'>): number {
+  return workersFor(prepared.alternatives.length, req.workers, ALTERNATIVES_PER_THREAD);
+}
+
+export async function runComparison(req: CompareRequest, prepared: PreparedComparison = prepareComparison(req)): Promise<Comparison> {
+  const { base, alternatives } = prepared;
+  const tasks = alternatives.map((a) => ({ text: a.text, file: alternativeFileName(base.file, a.index, alternatives.length), env: req.env, firstOrder: req.firstOrder, package: req.packages }));
   const results = await runPool('alternative', tasks, {
-    workers: workersFor(tasks.length, req.workers, ALTERNATIVES_PER_THREAD),
+    workers: alternativeThreads(prepared, req),
     onDone: (k, done) => req.onProgress?.(done, tasks.length, k + 1),
   });
-  refuseBadValues(specs, alternatives, results);
-  const rows: CompareRow[] = alternatives.map((a, k) => ({ index: a.index, values: a.values, label: alternativeLabel(specs, a.values), file: files[k]!, text: a.text, result: results[k]! }));
-  return { base, specs, rows, picks: picksOf(rows, specs, base.design.arms.map((a) => a.id)), source, secondOrder: base.design.analysis.secondOrder && !req.firstOrder };
+  return comparisonFrom(prepared, results, req.firstOrder);
 }

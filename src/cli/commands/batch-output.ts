@@ -5,10 +5,11 @@ import { FileLevelError } from '../../errors.ts';
 import type { CliIO } from '../io.ts';
 import { painter } from '../io.ts';
 import { writeFilesAtomic } from '../../output/write-atomic.ts';
-import { renderPdf } from '../../report/pdf/render-pdf.ts';
 import { INDEX_STEM, indexCsv, indexDocument, indexJson, type BatchIndex } from '../../batch/index-files.ts';
 
 export async function writeIndex(index: BatchIndex, outDir: string, io: CliIO, quiet: boolean): Promise<void> {
+  // Loaded here: the command line starts without the renderer.
+  const { renderPdf } = await import('../../report/pdf/render-pdf.ts');
   const pdf = await renderPdf(indexDocument(index, io.env));
   const files = [
     { path: join(outDir, `${INDEX_STEM}.csv`), data: indexCsv(index) },

@@ -65,20 +65,18 @@ function elementTable(model: FrameModel, d: Display): Block {
   return {
     kind: 'table',
     title: 'Elements',
-    header: ['Element', 'Member', 'Nodes', 's at i', 's at j', 'A', 'Iy = Iz', 'J', 'Offset at i'],
-    widths: [44, '*', 38, 44, 44, 50, 54, 54, 56],
+    header: ['Element', 'Nodes', 's at i', 'A', 'Iy = Iz', 'J', 'Offset'],
+    widths: [52, 34, 44, 54, 84, 84, '*'],
     rows: model.elements.map((e) => [
-      String(e.id),
-      memberText(e.member),
+      `${e.id}, ${memberText(e.member)}`,
       `${e.i}–${e.j}`,
       d.q(e.sI_m, 'length'),
-      d.q(e.sJ_m, 'length'),
       d.q(e.A_m2, 'sectionArea'),
       e.Iy_m4 === e.Iz_m4 ? d.q(e.Iy_m4, 'inertia') : `${d.q(e.Iy_m4, 'inertia')}, ${d.q(e.Iz_m4, 'inertia')}`,
       d.q(e.J_m4, 'inertia'),
       offset(e.offsetI_m),
     ]),
-    note: 'Each element is a prismatic 3D beam with the properties of its segment (section "Structural model": the tube at the segment\'s mid-length); wind and the checks take the tapered diameter at each place instead. s: distance along the member from its root (the pole base, or an arm\'s root at the pole face). Offset at i: length of the rigid link from the node on the pole axis to the element\'s end at the pole face. E and G as in section "Design criteria and assumptions".',
+    note: 'Element: its number and member. Each element is a prismatic 3D beam with the properties of its segment (section "Structural model": the tube at the segment\'s mid-length); wind and the checks take the tapered diameter at each place instead. s at i: distance of the element\'s start along the member from its root (the pole base, or an arm\'s root at the pole face). Offset: length of the rigid link at end i, from the node on the pole axis to the element\'s end at the pole face. E and G as in section "Design criteria and assumptions".',
   };
 }
 
