@@ -112,6 +112,7 @@ export function indexDocument(index: BatchIndex, env: Readonly<Record<string, st
     },
     cover: [{ kind: 'caution', title: caution.title ?? 'Caution', text: cautionText }],
     front: [],
+    runOn: true,
     sections: [{ id: 'index', title: 'Inputs and verdicts', blocks }],
   };
 }

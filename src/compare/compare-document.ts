@@ -96,6 +96,7 @@ export function comparisonDocument(c: Comparison, figures: readonly ChartFigure[
       { kind: 'caution', title: notes.title ?? 'About this comparison', text: noteText },
     ],
     front: [],
+    runOn: true,
     sections: [variedSection(c), tablesSection(c), chartsSection(figures)],
   };
 }

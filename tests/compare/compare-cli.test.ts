@@ -73,4 +73,16 @@ describe('polebook compare (compiled command)', () => {
     expect(text).toMatch(/4 ?✗ 4 ?m FAILS 1\.31 /);
     expect(text).toMatch(/1 ?★/);
   });
+
+  it('leaves no near-empty page in the comparison PDF: its short sections run on (read in-process)', async () => {
+    const { text } = await import('../support/pdf-text.ts').then(async (m) => ({ text: await m.readPdfText(readFileSync(join(dir, 'one', 'luminaire-twin.comparison.pdf'))) }));
+    // Fewer than 6 lines of body text (header and footer aside) on a page without a chart is near-empty (common practice for us: an eighth of a page).
+    const sparse = text.pages
+      .map((page, k) => ({ page: k + 1, body: page.split('\n').filter((l) => l.trim() !== '').slice(1, -1) }))
+      .filter(({ body }) => body.length < 6 && !body.some((l) => /^Figure \d+\.\d+/.test(l)))
+      .map(({ page, body }) => `page ${page}: ${body.length} lines`);
+    expect(sparse).toEqual([]);
+    // The contents share their page with the first section.
+    expect(text.pages[1]).toMatch(/Contents[\s\S]*1 {1,2}What was compared/);
+  });
 });
