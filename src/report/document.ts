@@ -28,6 +28,8 @@ export type Block =
       readonly caption: string;
       /** A paragraph printed to the left of the figure (the figure then sits at the right margin). */
       readonly beside?: { readonly text: string; readonly emphasis?: boolean };
+      /** Printed on one page with the block after it (a short table read with the figure). */
+      readonly withNext?: boolean;
     }
   | { readonly kind: 'code'; readonly title: string; readonly text: string }
   | {

@@ -66,6 +66,13 @@ export function blocksContent(blocks: readonly Block[], counter: SectionCounter)
       }
       continue;
     }
+    const following = blocks[i + 1];
+    if (block.kind === 'figure' && block.withNext === true && following !== undefined && following.kind !== 'heading') {
+      out.push({ stack: [blockContent(block, counter), blockContent(following, counter)], unbreakable: true });
+      afterStep = following.kind === 'step';
+      i++;
+      continue;
+    }
     const content = blockContent(block, counter);
     // The last step of a run goes with the one before it, so a page never holds one step alone.
     const endsRun = block.kind === 'step' && blocks[i + 1]?.kind !== 'step';

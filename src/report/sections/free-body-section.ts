@@ -143,6 +143,7 @@ function jointBlocks(analysis: DesignAnalysis, combo: Combination, arm: Arm, d: 
       title: `Joint of arm ${arm.id} and the pole, ${combo.id}`,
       svg: fig.svg,
       width_pt: fig.width,
+      withNext: true,
       caption: `${views}. Forces (blue) and moments (purple) that the member ends exert on the joint, the values of the table that follows; moments about the node, right-hand rule (curved arrow counter-clockwise: toward the reader). Stubs schematic; arrows sized per kind against the largest force and the largest moment, not to scale.${names}`,
     },
     table,
