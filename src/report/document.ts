@@ -88,7 +88,7 @@ export interface DocumentModel {
   /** Unnumbered pages between the cover and the contents, read first (revision history, summary). */
   readonly front: readonly DocSection[];
   readonly sections: readonly DocSection[];
-  /** A short document (a comparison, a batch index): its contents and sections run on from one
-   * another instead of each starting a page, so no page is left near-empty. */
+  /** A short document (a comparison, a batch index): its first section runs on below the contents
+   * instead of starting a page, so the contents page is not near-empty. */
   readonly runOn?: boolean;
 }

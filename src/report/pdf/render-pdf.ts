@@ -16,13 +16,8 @@ import { DEFAULT_STYLE, PAGE_MARGINS, pageSizeFor, STYLES } from './theme.ts';
  * for these rare cases: a section start is a fixed page break (asking here for every section cost
  * about 12 s on a 110-page package). */
 function pageBreakBefore(node: { headlineLevel?: number; startPosition?: { verticalRatio?: number } }): boolean {
-  const at = node.startPosition?.verticalRatio ?? 0;
-  return (node.headlineLevel === KEEP_WITH_NEXT_LEVEL && at > 0.75) || (node.headlineLevel === RUN_ON_SECTION_LEVEL && at > 0.6);
+  return node.headlineLevel === KEEP_WITH_NEXT_LEVEL && (node.startPosition?.verticalRatio ?? 0) > 0.75;
 }
-
-/** A run-on section's heading (DocumentModel.runOn) moves to the next page with less than 40 % of
- * the page left: a section's first table would not fit below it. */
-const RUN_ON_SECTION_LEVEL = KEEP_WITH_NEXT_LEVEL + 1;
 
 export function documentDefinition(doc: DocumentModel): TDocumentDefinitions {
   const { meta } = doc;
@@ -43,13 +38,15 @@ export function documentDefinition(doc: DocumentModel): TDocumentDefinitions {
   }
   content.push({ text: 'Contents', style: 'h1', pageBreak: 'before', id: 'contents', outline: true } as Content);
   content.push({ toc: { textStyle: { fontSize: 9.5 }, numberStyle: { fontSize: 9.5 } } } as Content);
-  // A run-on section heading is kept with what follows it instead of starting a page.
-  const sectionStart = doc.runOn === true ? { margin: [0, 14, 0, 6], headlineLevel: RUN_ON_SECTION_LEVEL } : { pageBreak: 'before' };
-  for (const { section, label, name } of labelSections(doc.sections)) {
+  // In a short document the first section runs on below the contents (no near-empty contents page).
+  // The rest start a page: a heading that only moved on when little of a page is left would cost a
+  // second layout of the whole document (pdfmake's pageBreakBefore).
+  labelSections(doc.sections).forEach(({ section, label, name }, k) => {
     const heading = section.appendix === true ? `${name}  ${section.title}` : `${label}  ${section.title}`;
-    content.push({ text: heading, style: 'h1', tocItem: true, tocStyle: { bold: true }, ...sectionStart, id: `section-${section.id}`, outline: true } as Content);
+    const start = doc.runOn === true && k === 0 ? { margin: [0, 14, 0, 10] } : { pageBreak: 'before' };
+    content.push({ text: heading, style: 'h1', tocItem: true, tocStyle: { bold: true }, ...start, id: `section-${section.id}`, outline: true } as Content);
     content.push(...blocksContent(section.blocks, newCounter(label, meta.units, `section-${section.id}`)));
-  }
+  });
   return {
     pageSize: pageSizeFor(meta.units),
     pageMargins: PAGE_MARGINS,
