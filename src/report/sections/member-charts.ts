@@ -8,7 +8,7 @@ import type { TopLevelSpec } from 'vega-lite';
 import type { DesignAnalysis } from '../../analyse-design.ts';
 import { envelope } from '../../analysis/index.ts';
 import type { CheckResults } from '../../checks/check-types.ts';
-import { resistancesAlong } from '../../checks/member-checks.ts';
+import { INTERACTION_EQUATION, resistancesAlong } from '../../checks/member-checks.ts';
 import type { LoadedDesign } from '../../design/design.ts';
 import { displayUnit, fromSI, prettyUnit, type Dim, type UnitSystem } from '../../units/units.ts';
 import { renderChartSvg } from '../charts/index.ts';
@@ -141,7 +141,7 @@ export async function memberCharts(loaded: LoadedDesign, analysis: DesignAnalysi
       title: `Internal forces in the ${name}, combination ${gov}`,
       svg: forces.svg,
       width_pt: forces.width,
-      caption: `Combination ${gov} gives the ${name} its largest resultant moment. Forces and moments in the member's local axes, sign convention as in the section "Structural model". φMn (dashed) is the design flexural strength of the section at each station (${flexureSource}), the capacity the resultant moment Mres is set against; the member-strength check adds the axial, shear and torsion terms to it (Eq. H3-6), and its ratio is charted next.`,
+      caption: `Combination ${gov} gives the ${name} its largest resultant moment. Forces and moments in the member's local axes, sign convention as in the section "Structural model". φMn (dashed) is the design flexural strength of the section at each station (${flexureSource}), the capacity the resultant moment Mres is set against; the member-strength check adds the axial, shear and torsion terms to it (${INTERACTION_EQUATION}), and its ratio is charted next.`,
     });
     out.push({
       member: m.id,
