@@ -154,7 +154,7 @@ export function freeBodyDiagram(scene: Scene, loads: readonly FreeBodyLoad[], op
   body.push(axes.svg);
   taken.push(axes.box);
   for (const lb of labels) {
-    const at = placeLabel(taken, lb.x, lb.y, lb.content, bounds);
+    const at = placeLabel(taken, lb.x, lb.y, lb.content, bounds, undefined, lb.bold === true);
     body.push(text(at.x, at.y, lb.content, { size: LABEL_SIZE, color: lb.color, bold: lb.bold }));
   }
   body.unshift(rect(0, 0, width, height, '#ffffff'));

@@ -14,9 +14,10 @@ export const overlaps = (a: Rect, b: Rect): boolean => a[0] < b[2] && b[0] < a[2
 
 /** Places a label beside (x, y): the first of a ring of places around it, nearest first, that
  * overlaps nothing placed so far and stays inside the figure. `rings` widens the search (each ring
- * one line height further out). The label's rectangle is reserved and returned. */
-export function placeLabel(taken: Rect[], x: number, y: number, content: string, bounds: Rect, rings = 7): { x: number; y: number; box: Rect } {
-  const w = measureText({ fontSize: LABEL_SIZE }, content);
+ * one line height further out; `bold` for a label drawn bold). The label's rectangle is reserved and returned. */
+export function placeLabel(taken: Rect[], x: number, y: number, content: string, bounds: Rect, rings = 7, bold = false): { x: number; y: number; box: Rect } {
+  // Measured in the face it is drawn in: a bold label is wider.
+  const w = measureText(bold ? { fontSize: LABEL_SIZE, fontWeight: 'bold' } : { fontSize: LABEL_SIZE }, content);
   const h = LABEL_SIZE + 2;
   const rectAt = (left: number, base: number): Rect => [left - 1, base - LABEL_SIZE, left + w + 1, base + 2];
   const candidates: [number, number][] = [];
