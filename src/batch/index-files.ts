@@ -6,7 +6,7 @@ import type { Block, DocumentModel } from '../report/document.ts';
 import { PACKAGE_STATUS } from '../report/sections/document-meta.ts';
 import { templateBlocks } from '../report/sections/templates.ts';
 import { toolVersion } from '../version.ts';
-import { formatNumber } from '../units/units.ts';
+import { formatNumber, formatRatio } from '../units/units.ts';
 import type { BuildOutcome } from './build-one.ts';
 
 export interface IndexRow {
@@ -86,7 +86,8 @@ export function indexDocument(index: BatchIndex, env: Readonly<Record<string, st
       kind: 'table',
       title: 'Inputs of the batch',
       header: ['file', 'structure', 'verdict', 'governing ratio', 'governing check', 'input hash'],
-      rows: index.rows.map((r) => [r.file, r.structure ?? '-', r.verdict, ratioText(r.governingRatio) || '-', r.governingCheck ?? (r.message ?? ''), r.inputHash ?? '-']),
+      // Ratios as every package and the terminal print them (three decimals); the CSV keeps four digits.
+      rows: index.rows.map((r) => [r.file, r.structure ?? '-', r.verdict, r.governingRatio === null ? '-' : formatRatio(r.governingRatio), r.governingCheck ?? (r.message ?? ''), r.inputHash ?? '-']),
       widths: ['auto', 'auto', 'auto', 'auto', '*', 'auto'],
     },
   ];
