@@ -8,8 +8,6 @@ import { compareJson } from './compare-json.ts';
 import type { Comparison } from './run-compare.ts';
 import { alternativeFiles, comparisonStem, type OutputFile } from './compare-files.ts';
 
-export { comparisonStem, type OutputFile };
-
 export async function comparisonOutputs(c: Comparison, opts: { readonly packages: boolean }): Promise<OutputFile[]> {
   const stem = comparisonStem(c.base.file);
   const figures = await comparisonCharts(c);

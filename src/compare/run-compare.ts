@@ -106,16 +106,11 @@ export function comparisonFrom(prepared: PreparedComparison, results: readonly E
   return { base, specs, rows, picks: picksOf(rows, specs, base.design.arms.map((a) => a.id)), source, secondOrder: base.design.analysis.secondOrder && !firstOrder };
 }
 
-/** The threads the alternatives of `prepared` get under `req`. */
-export function alternativeThreads(prepared: PreparedComparison, req: Pick<CompareRequest, 'workers'>): number {
-  return workersFor(prepared.alternatives.length, req.workers, ALTERNATIVES_PER_THREAD);
-}
-
 export async function runComparison(req: CompareRequest, prepared: PreparedComparison = prepareComparison(req)): Promise<Comparison> {
   const { base, alternatives } = prepared;
   const tasks = alternatives.map((a) => ({ text: a.text, file: alternativeFileName(base.file, a.index, alternatives.length), env: req.env, firstOrder: req.firstOrder, package: req.packages }));
   const results = await runPool('alternative', tasks, {
-    workers: alternativeThreads(prepared, req),
+    workers: workersFor(tasks.length, req.workers, ALTERNATIVES_PER_THREAD),
     onDone: (k, done) => req.onProgress?.(done, tasks.length, k + 1),
   });
   return comparisonFrom(prepared, results, req.firstOrder);

@@ -23,7 +23,7 @@ describe('the frame model appendix', () => {
     const nodes = tables[0] as Extract<(typeof tables)[number], { kind: 'table' }>;
     const row = (what: RegExp) => nodes.rows.find((r) => what.test(r[4]!))!;
     expect(row(/^pole base$/).slice(1, 4)).toEqual(['0 m', '0 m', '0 m']);
-    expect(row(/^pole base$/)[5]).toBe('fixed');
+    expect(row(/^pole base$/)[5]).toBe('all six (fixed)');
     expect(row(/pole top/)[3]).toBe('7.6 m');
     expect(row(/joint of arm A1/)[3]).toBe('7 m');
   });

@@ -89,3 +89,12 @@ export function ratioText(v: number): string {
   const inverse = 1 / v;
   return Math.abs(inverse - Math.round(inverse)) < 1e-6 * inverse ? `${text} (1/${Math.round(inverse)})` : text;
 }
+
+/** The six degrees of freedom of a node, in the solver's order. */
+export const DOF_NAMES = ['ux', 'uy', 'uz', 'rx', 'ry', 'rz'] as const;
+
+/** The restrained degrees of freedom of a support: 'all six (fixed)', 'ux, uy, uz' or 'none'. */
+export function restrainedText(fixed: readonly boolean[]): string {
+  const names = DOF_NAMES.filter((_, k) => fixed[k]);
+  return names.length === 6 ? 'all six (fixed)' : names.join(', ') || 'none';
+}

@@ -5,7 +5,8 @@ import type { DesignAnalysis } from '../../analyse-design.ts';
 import type { LoadedDesign } from '../../design/design.ts';
 import type { FrameModel, Vec3 } from '../../model/frame.ts';
 import type { Block, DocSection } from '../document.ts';
-import { display, memberText, type Display } from './display.ts';
+import { display, memberText, restrainedText, type Display } from './display.ts';
+import { withoutRoundOff } from './round-off.ts';
 
 export const MODEL_TABLES_ID = 'model-tables';
 export const MODEL_TABLES_TITLE = 'Frame model: nodes and elements';
@@ -36,26 +37,24 @@ function tagText(tag: string): string {
     .join('; ');
 }
 
-const DOF = ['ux', 'uy', 'uz', 'rx', 'ry', 'rz'] as const;
-
+/** A support's restraints as the table "Support conditions" gives them (its springs are there). */
 function supportText(model: FrameModel, node: number): string {
   const s = model.supports.find((q) => q.node === node);
   if (!s) return '';
-  if (s.fixed.every(Boolean)) return 'fixed';
-  const fixed = DOF.filter((_, k) => s.fixed[k]);
-  const springs = DOF.filter((_, k) => !s.fixed[k] && s.springs[k] !== 0);
-  return [fixed.length > 0 ? `fixed ${fixed.join(', ')}` : '', springs.length > 0 ? `springs ${springs.join(', ')}` : ''].filter((x) => x !== '').join('; ');
+  return s.springs.some((k) => k > 0) ? `${restrainedText(s.fixed)}; springs` : restrainedText(s.fixed);
 }
 
-const xyz = (v: Vec3, d: Display) => v.map((c) => d.q(Math.abs(c) < 1e-9 ? 0 : c, 'length'));
+/** Coordinates; round-off of the trigonometry (cos 90°) next to the structure's size prints as 0. */
+const xyz = (v: Vec3, size_m: number, d: Display) => v.map((c) => d.q(withoutRoundOff(c, size_m), 'length'));
 
 function nodeTable(model: FrameModel, d: Display): Block {
+  const size_m = Math.max(...model.nodes.flatMap((n) => n.xyz_m.map(Math.abs)));
   return {
     kind: 'table',
     title: 'Nodes',
     header: ['Node', 'x', 'y', 'z', 'What the node is', 'Support'],
     widths: [30, 52, 52, 52, '*', 58],
-    rows: model.nodes.map((n) => [String(n.id), ...xyz(n.xyz_m, d), tagText(n.tag), supportText(model, n.id)]),
+    rows: model.nodes.map((n) => [String(n.id), ...xyz(n.xyz_m, size_m, d), tagText(n.tag), supportText(model, n.id)]),
     note: 'Global axes, origin at the centre of the pole base, Z up (section "Structural model"). An arm\'s first node is on the pole axis; its first element starts at the pole face through a rigid offset (next table).',
   };
 }

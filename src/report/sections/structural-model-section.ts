@@ -12,14 +12,14 @@ import { baseText as restraintText } from '../../design/base-text.ts';
 import { conventionsSketch } from '../figures/conventions-sketch.ts';
 import { memberAxesSketch } from '../figures/member-axes-sketch.ts';
 import type { Block, DocSection } from '../document.ts';
-import { diameterText, display, memberText, shapeText, type Display } from './display.ts';
+import { diameterText, display, DOF_NAMES, memberText, restrainedText, shapeText, type Display } from './display.ts';
 import { stepsTable } from './step-table.ts';
 import { templateBlocks } from './templates.ts';
 import { MODEL_TABLES_TITLE } from './model-tables-section.ts';
 
 export const STRUCTURAL_MODEL_TITLE = 'Structural model';
 
-const DOF_NAMES = ['ux', 'uy', 'uz', 'rx', 'ry', 'rz'] as const;
+
 
 function sectionText(s: TubeSection, D_m: number, d: Display): string {
   return `${shapeText(s)}, ${diameterText(D_m, s, d)}, wall ${d.q(s.wall_m, 'section')}`;
@@ -170,12 +170,11 @@ function convergenceBlocks(loaded: LoadedDesign, analysis: DesignAnalysis, d: Di
 function supportBlocks(loaded: LoadedDesign, analysis: DesignAnalysis, d: Display): Block[] {
   const rows = analysis.model.supports.map((s) => {
     const node = analysis.model.nodes[s.node];
-    const fixed = DOF_NAMES.filter((_, k) => s.fixed[k]);
     const springs = DOF_NAMES.flatMap((name, k) => (s.springs[k] > 0 ? [`${name}: ${d.q(s.springs[k], k < 3 ? 'lineLoad' : 'rotStiffness')}`] : []));
     return [
       node.tag === 'base' ? 'pole base' : node.tag,
       `(${d.q(node.xyz_m[0], 'length')}, ${d.q(node.xyz_m[1], 'length')}, ${d.q(node.xyz_m[2], 'length')})`,
-      fixed.length === 6 ? 'all six (fixed)' : fixed.join(', ') || 'none',
+      restrainedText(s.fixed),
       springs.length > 0 ? springs.join('; ') : 'none',
     ];
   });
