@@ -47,27 +47,51 @@ export function placeLabel(taken: Rect[], x: number, y: number, content: string,
 export function placeLabelNear(taken: Rect[], x: number, y: number, content: string, bounds: Rect, reach = 60, toward: Pt | null = null): { x: number; y: number; box: Rect } {
   const w = measureText({ fontSize: LABEL_SIZE }, content);
   const rectAt = (left: number, base: number): Rect => [left - 1, base - LABEL_SIZE, left + w + 1, base + 2];
-  const candidates: { left: number; base: number; dist: number }[] = [];
+  // Every candidate rectangle lies in this window, so only what is reserved there can be in the
+  // way: a figure reserves hundreds of small squares along its lines, most of them far off.
+  const window: Rect = [x - reach - w - 1, y - reach - 2 * LABEL_SIZE, x + reach + w + 1, y + reach + LABEL_SIZE + 2];
+  const near = taken.filter((t) => overlaps(t, window));
+  // The places inside the figure, with their distances; tried nearest first (ties: higher, then
+  // further left). Sorting all of them for each label cost a fifth of a second per package, and
+  // a label mostly finds room close by: so the places are sorted and tried one band of
+  // distance at a time, which tries them in the same order.
+  const lefts: number[] = [];
+  const bases: number[] = [];
+  const dists: number[] = [];
   for (let dy = -reach - LABEL_SIZE; dy <= reach + LABEL_SIZE; dy += 2) {
     for (let dx = -reach - w; dx <= reach; dx += 2) {
-      const r = rectAt(x + dx, y + dy);
+      // The rectangle of rectAt, without making one for each of some five thousand places.
+      const left = x + dx;
+      const base = y + dy;
+      const r0 = left - 1;
+      const r1 = base - LABEL_SIZE;
+      const r2 = left + w + 1;
+      const r3 = base + 2;
+      if (r0 < bounds[0] || r2 > bounds[2] || r1 < bounds[1] || r3 > bounds[3]) continue;
       // Distance from the anchor to the nearest point of the label's rectangle, plus a little gap.
-      const gx = Math.max(r[0] - x, 0, x - r[2]);
-      const gy = Math.max(r[1] - y, 0, y - r[3]);
+      const gx = Math.max(r0 - x, 0, x - r2);
+      const gy = Math.max(r1 - y, 0, y - r3);
       const dist = Math.hypot(gx, gy);
       if (dist < 2 || dist > reach) continue;
       // How far the rectangle reaches behind the anchor, against `toward`.
-      const behind = toward ? Math.max(0, -Math.min((r[0] - x) * toward[0], (r[2] - x) * toward[0]) - Math.min((r[1] - y) * toward[1], (r[3] - y) * toward[1])) : 0;
-      candidates.push({ left: x + dx, base: y + dy, dist: dist + 0.5 * behind });
+      const behind = toward ? Math.max(0, -Math.min((r0 - x) * toward[0], (r2 - x) * toward[0]) - Math.min((r1 - y) * toward[1], (r3 - y) * toward[1])) : 0;
+      lefts.push(left);
+      bases.push(base);
+      dists.push(dist + 0.5 * behind);
     }
   }
-  candidates.sort((a, b) => a.dist - b.dist || a.base - b.base || a.left - b.left);
-  for (const c of candidates) {
-    const r = rectAt(c.left, c.base);
-    const inside = r[0] >= bounds[0] && r[2] <= bounds[2] && r[1] >= bounds[1] && r[3] <= bounds[3];
-    if (inside && !taken.some((t) => overlaps(t, r))) {
-      taken.push(r);
-      return { x: c.left, y: c.base, box: r };
+  const farthest = dists.reduce((m, d) => Math.max(m, d), 0);
+  const BAND = 8;
+  for (let from = 0; from <= farthest; from += BAND) {
+    const band: number[] = [];
+    for (let k = 0; k < dists.length; k++) if (dists[k]! >= from && dists[k]! < from + BAND) band.push(k);
+    band.sort((a, b) => dists[a]! - dists[b]! || bases[a]! - bases[b]! || lefts[a]! - lefts[b]!);
+    for (const k of band) {
+      const r = rectAt(lefts[k]!, bases[k]!);
+      if (!near.some((t) => overlaps(t, r))) {
+        taken.push(r);
+        return { x: lefts[k]!, y: bases[k]!, box: r };
+      }
     }
   }
   const box = rectAt(x + 3, y - 2);
