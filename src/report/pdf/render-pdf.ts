@@ -8,7 +8,7 @@ import { titleBlock } from './cover.ts';
 import { fontDictionary, isAllowedLocalFile } from './fonts.ts';
 import { footerFor, headerFor } from './page-frame.ts';
 import { packageDate } from './package-date.ts';
-import { keepSvgTextAsWritten } from './svg-size.ts';
+import { sizeSvgByRootTag } from './svg-size.ts';
 import { DEFAULT_STYLE, PAGE_MARGINS, pageSizeFor, STYLES } from './theme.ts';
 
 /** A heading marked keep-with-next moves to the next page when less than about a quarter page is
@@ -75,6 +75,6 @@ export async function renderPdf(doc: DocumentModel): Promise<Buffer> {
   pdfmake.setUrlAccessPolicy(() => false);
   pdfmake.setLocalAccessPolicy(isAllowedLocalFile);
   pdfmake.setFonts(fontDictionary());
-  keepSvgTextAsWritten();
+  sizeSvgByRootTag();
   return pdfmake.createPdf(documentDefinition(doc)).getBuffer();
 }
