@@ -1,7 +1,12 @@
-// One cold build of a package in a fresh process, for bench/cold-build.ts: the time of each phase
+// One cold build of a package in a fresh process, for bench/cold-build.ts, with the command's heap
+// setting: the time of each phase
 // (module imports, input, analysis, checks, vega member charts, document model with its figures, PDF layout and
 // rendering, writing) and the peak memory, printed as one JSON line on stdout.
 import { performance } from 'node:perf_hooks';
+import { growHeapInSmallSteps } from '../src/heap-growth.ts';
+
+// As the command does first (src/cli/main.ts).
+growHeapInSmallSteps();
 
 const file = process.argv[2];
 const out = process.argv[3];
