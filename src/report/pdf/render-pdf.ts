@@ -6,6 +6,7 @@ import { labelSections } from '../section-labels.ts';
 import { blockContent, blocksContent, KEEP_WITH_NEXT_LEVEL, newCounter } from './blocks.ts';
 import { titleBlock } from './cover.ts';
 import { fontDictionary, isAllowedLocalFile } from './fonts.ts';
+import { joinWordsAfterLayout } from './join-inlines.ts';
 import { footerFor, headerFor } from './page-frame.ts';
 import { packageDate } from './package-date.ts';
 import { sizeSvgByRootTag } from './svg-size.ts';
@@ -76,5 +77,6 @@ export async function renderPdf(doc: DocumentModel): Promise<Buffer> {
   pdfmake.setLocalAccessPolicy(isAllowedLocalFile);
   pdfmake.setFonts(fontDictionary());
   sizeSvgByRootTag();
+  joinWordsAfterLayout();
   return pdfmake.createPdf(documentDefinition(doc)).getBuffer();
 }

@@ -1,0 +1,82 @@
+// pdfmake lays a line out word by word and then draws every word with its own pdfkit text call
+// (its renderer notes the missing "optimizeInlines" step). After the layout, this joins each run of
+// words that touch and look alike into one piece of text drawn from the first word's place: the
+// glyphs land where they did (pdfkit lays a text out in pieces ending at a space, as pdfmake
+// measured them), and the largest package draws about a third of the text pieces, in about 0.3 s less and a third fewer
+// PDF bytes. Words that carry anything else (a link, a page reference, a decoration, a background,
+// other font features) are drawn as laid out.
+import { createRequire } from 'node:module';
+
+const require = createRequire(import.meta.url);
+
+/** The parts of a pdfmake inline (a laid-out word) that say how it is drawn. */
+export interface LaidOutWord {
+  text: string;
+  x: number;
+  width: number;
+  height: number;
+  readonly font: unknown;
+  readonly fontSize: number;
+  readonly color?: unknown;
+  readonly opacity?: number;
+  readonly characterSpacing?: number;
+  readonly sup?: boolean;
+  readonly sub?: boolean;
+  readonly [other: string]: unknown;
+}
+
+export interface LaidOutLine {
+  inlines: LaidOutWord[];
+  readonly _pageNodeRef?: unknown;
+}
+
+/** Drawn the same way: same face, size, colour, opacity, spacing and baseline shift. */
+const LOOKS = ['font', 'fontSize', 'color', 'opacity', 'characterSpacing', 'sup', 'sub'] as const;
+/** Anything of these and the word is drawn on its own, as pdfmake laid it out. */
+const OWN = ['link', 'linkToPage', 'linkToDestination', 'decoration', 'background', 'fontFeatures', '_pageNodeRef', '_tocItemRef', '_pageRef'] as const;
+
+/** Where a word ends and the next begins within this, they touch (pdfmake places them by adding widths). */
+const TOUCH_PT = 1e-9;
+
+/** pdfkit lays a text out in pieces that end at a space or tab, each on its own (no kerning across):
+ * a word ending so is drawn the same alone or joined to the next. A word that ends where pdfmake
+ * broke a line opportunity inside a word ("HV-" of "HV-TS") would be kerned to the next if joined. */
+const endsWord = (text: string): boolean => text.endsWith(' ') || text.endsWith('\t');
+
+/** Letter-spaced words are left apart too: pdfmake measures a word's spacing between its own letters
+ * only, pdfkit would add it after each joined word as well. */
+const plain = (w: LaidOutWord): boolean => !w.characterSpacing && OWN.every((k) => w[k] === undefined || w[k] === null || w[k] === false);
+
+/** Joins the touching look-alike words of a line (in place; the words themselves are not changed). */
+export function joinLineWords(line: LaidOutLine): void {
+  // pdfmake writes a line's page reference into its first word when it draws it.
+  if (line._pageNodeRef !== undefined || line.inlines.length < 2) return;
+  const out: LaidOutWord[] = [line.inlines[0]!];
+  for (let k = 1; k < line.inlines.length; k++) {
+    const a = out[out.length - 1]!;
+    const b = line.inlines[k]!;
+    if (endsWord(a.text) && plain(a) && plain(b) && LOOKS.every((key) => a[key] === b[key]) && Math.abs(b.x - (a.x + a.width)) < TOUCH_PT) {
+      out[out.length - 1] = { ...a, text: a.text + b.text, width: b.x + b.width - a.x, height: Math.max(a.height, b.height) };
+    } else out.push(b);
+  }
+  line.inlines = out;
+}
+
+interface LayoutBuilderClass {
+  prototype: { layoutDocument(...args: unknown[]): { items: { type: string; item: unknown }[] }[] };
+}
+
+let installed = false;
+
+/** Runs joinLineWords on every text line of each laid-out document, before pdfmake draws it (once). */
+export function joinWordsAfterLayout(): void {
+  if (installed) return;
+  const LayoutBuilder = (require('pdfmake/js/LayoutBuilder.js') as { default: LayoutBuilderClass }).default;
+  const layoutDocument = LayoutBuilder.prototype.layoutDocument;
+  LayoutBuilder.prototype.layoutDocument = function (...args) {
+    const pages = layoutDocument.apply(this, args);
+    for (const page of pages) for (const it of page.items) if (it.type === 'line') joinLineWords(it.item as LaidOutLine);
+    return pages;
+  };
+  installed = true;
+}
