@@ -30,11 +30,6 @@ export interface LaidOutLine {
   readonly _pageNodeRef?: unknown;
 }
 
-/** Drawn the same way: same face, size, colour, opacity, spacing and baseline shift. */
-const LOOKS = ['font', 'fontSize', 'color', 'opacity', 'characterSpacing', 'sup', 'sub'] as const;
-/** Anything of these and the word is drawn on its own, as pdfmake laid it out. */
-const OWN = ['link', 'linkToPage', 'linkToDestination', 'decoration', 'background', 'fontFeatures', '_pageNodeRef', '_tocItemRef', '_pageRef'] as const;
-
 /** Where a word ends and the next begins within this, they touch (pdfmake places them by adding widths). */
 const TOUCH_PT = 1e-9;
 
@@ -43,21 +38,38 @@ const TOUCH_PT = 1e-9;
  * broke a line opportunity inside a word ("HV-" of "HV-TS") would be kerned to the next if joined. */
 const endsWord = (text: string): boolean => text.endsWith(' ') || text.endsWith('\t');
 
-/** Letter-spaced words are left apart too: pdfmake measures a word's spacing between its own letters
- * only, pdfkit would add it after each joined word as well. */
-const plain = (w: LaidOutWord): boolean => !w.characterSpacing && OWN.every((k) => w[k] === undefined || w[k] === null || w[k] === false);
+const absent = (v: unknown): boolean => v === undefined || v === null || v === false;
+
+/** Drawn as laid out, on its own: a link, a page reference, a decoration, a background, font
+ * features, or letter spacing (pdfmake measures a word's spacing between its own letters only,
+ * pdfkit would add it after each joined word as well). */
+const plain = (w: LaidOutWord): boolean =>
+  !w.characterSpacing && absent(w.link) && absent(w.linkToPage) && absent(w.linkToDestination) && absent(w.decoration) && absent(w.background) && absent(w.fontFeatures) && absent(w._pageNodeRef) && absent(w._tocItemRef) && absent(w._pageRef);
+
+/** Drawn the same way (face, size, colour, opacity, baseline shift), and b starts where a ends. */
+const joinable = (a: LaidOutWord, b: LaidOutWord): boolean =>
+  endsWord(a.text) && a.font === b.font && a.fontSize === b.fontSize && a.color === b.color && a.opacity === b.opacity && a.sup === b.sup && a.sub === b.sub && Math.abs(b.x - (a.x + a.width)) < TOUCH_PT && plain(a) && plain(b);
 
 /** Joins the touching look-alike words of a line (in place; the words themselves are not changed). */
 export function joinLineWords(line: LaidOutLine): void {
   // pdfmake writes a line's page reference into its first word when it draws it.
   if (line._pageNodeRef !== undefined || line.inlines.length < 2) return;
-  const out: LaidOutWord[] = [line.inlines[0]!];
-  for (let k = 1; k < line.inlines.length; k++) {
+  const words = line.inlines;
+  const out: LaidOutWord[] = [words[0]!];
+  // The copy of a run's first word that the run's words are joined into (one copy per run).
+  let run: LaidOutWord | null = null;
+  for (let k = 1; k < words.length; k++) {
     const a = out[out.length - 1]!;
-    const b = line.inlines[k]!;
-    if (endsWord(a.text) && plain(a) && plain(b) && LOOKS.every((key) => a[key] === b[key]) && Math.abs(b.x - (a.x + a.width)) < TOUCH_PT) {
-      out[out.length - 1] = { ...a, text: a.text + b.text, width: b.x + b.width - a.x, height: Math.max(a.height, b.height) };
-    } else out.push(b);
+    const b = words[k]!;
+    if (!joinable(a, b)) {
+      out.push(b);
+      run = null;
+      continue;
+    }
+    if (run === null) out[out.length - 1] = run = { ...a };
+    run.text += b.text;
+    run.width = b.x + b.width - run.x;
+    run.height = Math.max(run.height, b.height);
   }
   line.inlines = out;
 }
