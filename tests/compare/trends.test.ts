@@ -17,7 +17,7 @@ const FT_M = 0.3048;
 const IN_M = 0.0254;
 
 describe('base moment against arm length, a weight at the tip', () => {
-  // The luminaire starter made a statics problem: one horizontal prismatic arm (2.375 in x 0.154 in)
+  // The luminaire starter made a statics problem: one horizontal prismatic arm (3.5 in x 0.154 in)
   // from the pole top, the 50 lb luminaire at its tip (position = length), dead load only, first
   // order. Moment of the weights about the pole base (statics of rigid bodies, e.g. Hibbeler,
   // Engineering Mechanics: Statics, moment of a force about an axis): the pole's own weight acts on
@@ -36,12 +36,12 @@ describe('base moment against arm length, a weight at the tip', () => {
     const c = await runComparison({ input: file, vary: [`A1.length+L1.position=${lengths.join(',')} ft`], env: ENV, firstOrder: false, packages: false, workers: 1 });
     const M = c.rows.map((r) => r.result.metrics!.baseMoment!.value);
     for (let k = 1; k < M.length; k++) expect(M[k]!).toBeGreaterThan(M[k - 1]!);
-    const D = 2.375 * IN_M;
+    const D = 3.5 * IN_M;
     const t = 0.154 * IN_M;
     const A = (Math.PI / 4) * (D ** 2 - (D - 2 * t) ** 2);
     const w = 490 * (LBF_N / FT_M ** 3) * A; // N/m: 490 lb/ft3 weight density
     const P = 50 * LBF_N;
-    const r = ((8 - 0.14 * 30) / 2) * IN_M; // pole face radius at 30 ft: (8 in - 0.14 in/ft x 30 ft) / 2
+    const r = ((10 - 0.14 * 30) / 2) * IN_M; // pole face radius at 30 ft: (10 in - 0.14 in/ft x 30 ft) / 2
     lengths.forEach((Lft, k) => {
       const L = Lft * FT_M;
       const hand = P * (r + L) + w * L * (r + L / 2);
