@@ -5,7 +5,7 @@
 import { performance } from 'node:perf_hooks';
 import { growHeapInSmallSteps } from '../src/heap-growth.ts';
 
-// As the command does first (src/cli/main.ts).
+// As a single build does (src/cli/commands/build.ts).
 growHeapInSmallSteps();
 
 const file = process.argv[2];

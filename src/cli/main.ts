@@ -1,9 +1,6 @@
 #!/usr/bin/env node
 // The installed `polebook` command.
-import { growHeapInSmallSteps } from '../heap-growth.ts';
 import { runCli } from './run.ts';
-
-growHeapInSmallSteps();
 
 // `polebook ... | head`: a reader that stops early is not an error of ours.
 for (const stream of [process.stdout, process.stderr]) {

@@ -6,6 +6,7 @@ import { parseArgs, UsageError } from '../args.ts';
 import type { Command } from '../run.ts';
 import { painter } from '../io.ts';
 import { buildPackage } from '../../pipeline.ts';
+import { growHeapInSmallSteps } from '../../heap-growth.ts';
 import { writeFilesAtomic } from '../../output/write-atomic.ts';
 import { checkOutputsWritable } from '../../output/check-outputs.ts';
 import { printWarnings } from './print-warnings.ts';
@@ -101,6 +102,7 @@ export const buildCommand: Command = {
     const written = [pdfPath, ...(args.flags.has('json') ? [jsonPath] : [])];
     // Before the analysis: a folder in the way or a protected package is said at once.
     checkOutputsWritable(outDir, written);
+    growHeapInSmallSteps();
     const result = await buildPackage(input, { env: io.env, firstOrder: args.flags.has('first-order'), json: args.flags.has('json') });
     printWarnings(result.loaded.warnings, io);
     // Everything is computed before anything is written; asked again in case it changed meanwhile.
