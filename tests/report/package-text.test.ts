@@ -88,6 +88,18 @@ describe.each(EXAMPLES)('the package of examples/%s, read in-process', (example)
     });
     expect(bad).toEqual([]);
   });
+
+  it('never cuts a power of ten across lines ("50.89 × 10⁻" over "⁶ kip·ft")', () => {
+    const bad: string[] = [];
+    text.pages.forEach((page, k) => {
+      // A cell's piece ends at three spaces or the line end: a power of ten without its exponent
+      // ends a piece only if it was cut ("× 1" alone is a factor of one), and no piece starts with
+      // a superscript.
+      for (const m of page.matchAll(/× 10⁻?(?= {3}|\n|$)/g)) bad.push(`page ${k + 1}: ...${page.slice(Math.max(0, m.index - 20), m.index + 6)}`);
+      for (const m of page.matchAll(/(?:^|\n| {3})\s*[⁻⁰¹²³⁴⁵⁶⁷⁸⁹]/g)) bad.push(`page ${k + 1}: ${page.slice(m.index, m.index + 20).trim()}...`);
+    });
+    expect(bad).toEqual([]);
+  });
 });
 
 describe('determinism, in-process', () => {

@@ -7,6 +7,7 @@ import { blockContent, blocksContent, KEEP_WITH_NEXT_LEVEL, newCounter } from '.
 import { titleBlock } from './cover.ts';
 import { fontDictionary, isAllowedLocalFile } from './fonts.ts';
 import { joinWordsAfterLayout } from './join-inlines.ts';
+import { breakTooWideWordsAtNoBreakSpaces } from './whole-words.ts';
 import { footerFor, headerFor } from './page-frame.ts';
 import { packageDate } from './package-date.ts';
 import { sizeSvgByRootTag } from './svg-size.ts';
@@ -78,5 +79,6 @@ export async function renderPdf(doc: DocumentModel): Promise<Buffer> {
   pdfmake.setFonts(fontDictionary());
   sizeSvgByRootTag();
   joinWordsAfterLayout();
+  breakTooWideWordsAtNoBreakSpaces();
   return pdfmake.createPdf(documentDefinition(doc)).getBuffer();
 }
