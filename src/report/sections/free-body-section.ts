@@ -121,7 +121,8 @@ function jointBlocks(analysis: DesignAnalysis, combo: Combination, arm: Arm, d: 
     kind: 'table',
     title: `Free body of the joint of arm ${arm.id} and the pole, ${combo.id}`,
     header: ['On the joint', 'Fx', 'Fy', 'Fz', 'Mx', 'My', 'Mz'],
-    widths: ['*', 46, 46, 46, 54, 54, 54],
+    // Room for the values (a power of ten and its unit on two lines at most); the names wrap.
+    widths: [96, '*', '*', '*', '*', '*', '*'],
     rows,
     note: `Global axes; forces and moments that each member end exerts on the joint node (node ${j.node}), moments about the node: the arm's end at the pole face is carried to the node through its rigid offset. They balance: the last row is round-off. Values below ${tol === ROUND_OFF ? '1e-9' : `the P-delta tolerance (${tol})`} of the largest print as 0.${drawnWith.has(j.node) ? ` This joint is drawn above with arm ${drawnWith.get(j.node)!}.` : ''}`,
   };
