@@ -14,7 +14,8 @@ export const overlaps = (a: Rect, b: Rect): boolean => a[0] < b[2] && b[0] < a[2
 
 /** Places a label beside (x, y): the first of a ring of places around it, nearest first, that
  * overlaps nothing placed so far and stays inside the figure. `rings` widens the search (each ring
- * one line height further out; `bold` for a label drawn bold). The label's rectangle is reserved and returned. */
+ * one line height further out; `bold` for a label drawn bold); when the ring is full, the nearest
+ * free place within CROWDED_REACH (placeLabelNear). The label's rectangle is reserved and returned. */
 export function placeLabel(taken: Rect[], x: number, y: number, content: string, bounds: Rect, rings = 7, bold = false): { x: number; y: number; box: Rect } {
   // Measured in the face it is drawn in: a bold label is wider.
   const w = measureText(bold ? { fontSize: LABEL_SIZE, fontWeight: 'bold' } : { fontSize: LABEL_SIZE }, content);
@@ -33,19 +34,23 @@ export function placeLabel(taken: Rect[], x: number, y: number, content: string,
       return { x: left, y: base, box: r };
     }
   }
-  const box = rectAt(x + 3, y - 2);
-  taken.push(box);
-  return { x: x + 3, y: y - 2, box };
+  // Crowded (the loads of an arm seen end-on all land on the pole): the nearest free place of the
+  // whole neighbourhood rather than one on top of another label.
+  return placeLabelNear(taken, x, y, content, bounds, CROWDED_REACH, null, bold);
 }
+
+/** How far from its anchor a crowded label of placeLabel may go, in drawing units. */
+const CROWDED_REACH = 140;
 
 /** Places a label as near (x, y) as it fits: over a grid of places around the anchor in every
  * direction, the one whose rectangle comes closest to the anchor that overlaps nothing placed so
  * far and stays inside the figure (up to `reach` away; beyond, at the anchor, overlapping). With
  * `toward` (a page direction) a place on that side of the anchor counts as nearer than one
  * behind it, so that labels of one part of a figure gather on its side. For figures whose
- * anchors crowd, where the ring of placeLabel would stack a label far above. */
-export function placeLabelNear(taken: Rect[], x: number, y: number, content: string, bounds: Rect, reach = 60, toward: Pt | null = null): { x: number; y: number; box: Rect } {
-  const w = measureText({ fontSize: LABEL_SIZE }, content);
+ * anchors crowd, where the ring of placeLabel would stack a label far above (`bold` for a label
+ * drawn bold). */
+export function placeLabelNear(taken: Rect[], x: number, y: number, content: string, bounds: Rect, reach = 60, toward: Pt | null = null, bold = false): { x: number; y: number; box: Rect } {
+  const w = measureText(bold ? { fontSize: LABEL_SIZE, fontWeight: 'bold' } : { fontSize: LABEL_SIZE }, content);
   const rectAt = (left: number, base: number): Rect => [left - 1, base - LABEL_SIZE, left + w + 1, base + 2];
   // Every candidate rectangle lies in this window, so only what is reserved there can be in the
   // way: a figure reserves hundreds of small squares along its lines, most of them far off.

@@ -1,0 +1,63 @@
+// The labels of the whole-structure free-body and load-case figures (src/report/figures/free-body.ts)
+// never sit on one another, on the examples and on a crowded support: a four-arm variant of the
+// signal support whose side arm points at the reader in the elevation, so the loads on it all land
+// on the pole. Read back from the SVG the figure builder wrote: every label's text and place,
+// measured with the embedded face (the measure is checked against pdfkit in label-place.test.ts).
+import { join } from 'node:path';
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { parseDocument } from 'yaml';
+import { loadDesignFile, loadDesignText } from '../../src/input/index.ts';
+import type { LoadedDesign } from '../../src/design/design.ts';
+import { packageRoot } from '../../src/package-root.ts';
+import { analyseAndCheck } from '../../src/pipeline.ts';
+import { measureText } from '../../src/report/charts/index.ts';
+import { LABEL_SIZE, overlaps, type Rect } from '../../src/report/figures/label-place.ts';
+import { freeBodySection } from '../../src/report/sections/free-body-section.ts';
+
+const unescape = (s: string) => s.replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&quot;/g, '"').replace(/&#39;/g, "'").replace(/&amp;/g, '&');
+
+/** The ink box of each label-sized text of an SVG: from a little above the capitals to the descenders. */
+function labelBoxes(svg: string): { text: string; box: Rect }[] {
+  const out: { text: string; box: Rect }[] = [];
+  for (const m of svg.matchAll(/<text ([^>]*)>([^<]*)<\/text>/g)) {
+    const attr = (name: string) => new RegExp(`\\b${name}="([^"]*)"`).exec(m[1]!)?.[1];
+    if (Number(attr('font-size')) !== LABEL_SIZE) continue;
+    const x = Number(attr('x'));
+    const y = Number(attr('y'));
+    const text = unescape(m[2]!);
+    const w = measureText(attr('font-weight') === 'bold' ? { fontSize: LABEL_SIZE, fontWeight: 'bold' } : { fontSize: LABEL_SIZE }, text);
+    out.push({ text, box: [x, y - 0.75 * LABEL_SIZE, x + w, y + 0.2 * LABEL_SIZE] });
+  }
+  return out;
+}
+
+function crowdedFourArm(): LoadedDesign {
+  const file = join(packageRoot(), 'examples', 'signal-support.yaml');
+  const doc = parseDocument(readFileSync(file, 'utf8'));
+  doc.addIn(['structure', 'arms'], doc.createNode({ id: 'SB', attachHeight: 20, direction: '90 deg', length: 30, rise: '2 deg', section: { shape: 'round', rootDiameter: 12, taper: 0.14, wall: 0.25 } }));
+  doc.addIn(['attachments', 'points'], doc.createNode({ id: 'H4', type: 'signal-head', description: '3-section head, side street', on: 'SB', position: 25, weight: 55, windArea: 9.5, offset: { vertical: -2.5 } }));
+  return { ...loadDesignText(doc.toString(), 'four-arm.yaml', {}), file: 'four-arm.yaml' };
+}
+
+const cases: [string, () => LoadedDesign][] = [
+  ...['cantilever-sign', 'luminaire-twin', 'signal-support'].map((name): [string, () => LoadedDesign] => [name, () => ({ ...loadDesignFile(join(packageRoot(), 'examples', `${name}.yaml`)), file: `${name}.yaml` })]),
+  ['a four-arm support with an arm seen end-on', crowdedFourArm],
+];
+
+describe.each(cases)('free-body figures of %s', (_name, load) => {
+  it('print every label clear of every other label', () => {
+    const loaded = load();
+    const { analysis, checks } = analyseAndCheck(loaded);
+    const figures = freeBodySection(loaded, analysis, checks).blocks.filter((b) => b.kind === 'figure' && (b.title.startsWith('Free body,') || b.title.startsWith('Load case')));
+    expect(figures.length).toBeGreaterThan(2);
+    const clashes: string[] = [];
+    for (const fig of figures) {
+      if (fig.kind !== 'figure') continue;
+      const labels = labelBoxes(fig.svg);
+      expect(labels.length).toBeGreaterThan(0);
+      for (let a = 0; a < labels.length; a++) for (let b = a + 1; b < labels.length; b++) if (overlaps(labels[a]!.box, labels[b]!.box)) clashes.push(`${fig.title}: "${labels[a]!.text}" on "${labels[b]!.text}"`);
+    }
+    expect(clashes).toEqual([]);
+  }, 60_000);
+});
