@@ -14,21 +14,32 @@ import { analyseAndCheck } from '../../src/pipeline.ts';
 import { measureText } from '../../src/report/charts/index.ts';
 import { LABEL_SIZE, overlaps, type Rect } from '../../src/report/figures/label-place.ts';
 import { freeBodySection } from '../../src/report/sections/free-body-section.ts';
+import { elevationPlanSection } from '../../src/report/sections/elevation-plan-section.ts';
+import { summarySection } from '../../src/report/sections/summary-section.ts';
 
 const unescape = (s: string) => s.replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&quot;/g, '"').replace(/&#39;/g, "'").replace(/&amp;/g, '&');
 
-/** The ink box of each label-sized text of an SVG: from a little above the capitals to the descenders. */
-function labelBoxes(svg: string): { text: string; box: Rect }[] {
+/** The ink box of each unrotated text of an SVG of the given sizes: from a little above the
+ * capitals to the descenders, placed by its anchor. */
+function labelBoxes(svg: string, sizes: readonly number[] = [LABEL_SIZE]): { text: string; box: Rect }[] {
   const out: { text: string; box: Rect }[] = [];
   for (const m of svg.matchAll(/<text ([^>]*)>([^<]*)<\/text>/g)) {
     const attr = (name: string) => new RegExp(`\\b${name}="([^"]*)"`).exec(m[1]!)?.[1];
-    if (Number(attr('font-size')) !== LABEL_SIZE) continue;
-    const x = Number(attr('x'));
+    const size = Number(attr('font-size'));
+    if (!sizes.includes(size) || attr('transform') !== undefined) continue;
     const y = Number(attr('y'));
     const text = unescape(m[2]!);
-    const w = measureText(attr('font-weight') === 'bold' ? { fontSize: LABEL_SIZE, fontWeight: 'bold' } : { fontSize: LABEL_SIZE }, text);
-    out.push({ text, box: [x, y - 0.75 * LABEL_SIZE, x + w, y + 0.2 * LABEL_SIZE] });
+    const w = measureText(attr('font-weight') === 'bold' ? { fontSize: size, fontWeight: 'bold' } : { fontSize: size }, text);
+    const anchor = attr('text-anchor');
+    const x = Number(attr('x')) - (anchor === 'middle' ? w / 2 : anchor === 'end' ? w : 0);
+    out.push({ text, box: [x, y - 0.75 * size, x + w, y + 0.2 * size] });
   }
+  return out;
+}
+
+function clashesOf(title: string, labels: readonly { text: string; box: Rect }[]): string[] {
+  const out: string[] = [];
+  for (let a = 0; a < labels.length; a++) for (let b = a + 1; b < labels.length; b++) if (overlaps(labels[a]!.box, labels[b]!.box)) out.push(`${title}: "${labels[a]!.text}" on "${labels[b]!.text}"`);
   return out;
 }
 
@@ -56,8 +67,20 @@ describe.each(cases)('free-body figures of %s', (_name, load) => {
       if (fig.kind !== 'figure') continue;
       const labels = labelBoxes(fig.svg);
       expect(labels.length).toBeGreaterThan(0);
-      for (let a = 0; a < labels.length; a++) for (let b = a + 1; b < labels.length; b++) if (overlaps(labels[a]!.box, labels[b]!.box)) clashes.push(`${fig.title}: "${labels[a]!.text}" on "${labels[b]!.text}"`);
+      clashes.push(...clashesOf(fig.title, labels));
     }
+    expect(clashes).toEqual([]);
+  }, 60_000);
+
+  it('the structure drawings (summary sketch, elevation and plan) print their names clear of one another', () => {
+    const loaded = load();
+    const { analysis, checks } = analyseAndCheck(loaded);
+    const figures = [
+      ...summarySection(loaded, analysis, checks, { checks: 'Design checks', results: 'Analysis results' }).blocks,
+      ...elevationPlanSection(loaded, analysis).blocks,
+    ].filter((b) => b.kind === 'figure');
+    expect(figures.length).toBeGreaterThanOrEqual(3);
+    const clashes = figures.flatMap((fig) => (fig.kind === 'figure' ? clashesOf(fig.title, labelBoxes(fig.svg, [7, 8])) : []));
     expect(clashes).toEqual([]);
   }, 60_000);
 });

@@ -4,6 +4,8 @@
 // comes from the caller (already in the user's units): this file only places it.
 import type { Vec3 } from '../../model/frame.ts';
 import { boxOf, fitFrame, viewCoords, type Box, type Frame2D, type ViewKind } from './projection.ts';
+import { measureText } from '../charts/text-measure.ts';
+import { overlaps, type Rect } from './label-place.ts';
 import { arrow, arrowhead, circle, group, INK, line, polygon, rect, svgDocument, text, type Pt } from './svg.ts';
 
 export interface SceneMember {
@@ -188,14 +190,37 @@ function heightDimsSvg(f: Frame2D, box: Box, dims: readonly HeightDim[]): string
   return out.join('');
 }
 
-function attachmentSvg(f: Frame2D, view: ViewKind, a: SceneAttachment): string {
+/** Where a point attachment's label may go, from its mark's centre: below right first, then above
+ * right, below left, above left, then a line further out (x of the text's start, or of its end
+ * for the left places). */
+const POINT_LABEL_PLACES: readonly (readonly [number, number, 'start' | 'end'])[] = [
+  [5, 9, 'start'],
+  [5, -5, 'start'],
+  [-5, 9, 'end'],
+  [-5, -5, 'end'],
+  [5, 17, 'start'],
+  [5, -13, 'start'],
+  [-5, 17, 'end'],
+  [-5, -13, 'end'],
+];
+
+/** Draws an attachment. A point attachment's label takes the first of its places clear of
+ * `reserved` (the arms' names, the labels placed before), and its mark and label are reserved. */
+function attachmentSvg(f: Frame2D, view: ViewKind, a: SceneAttachment, reserved: Rect[]): string {
   const c = f.at(a.centre);
   const h = f.at(a.anchor);
   const out: string[] = [];
   if (a.kind === 'point') {
     out.push(line(h[0], h[1], c[0], c[1], { color: INK.muted, width: 0.6 }));
     out.push(circle(c[0], c[1], 3, '#ffffff', { color: INK.accent, width: 1 }));
-    out.push(text(c[0] + 5, c[1] + 9, a.label, { size: 7, color: INK.accent, bold: true }));
+    const w = measureText({ fontSize: 7, fontWeight: 'bold' }, a.label);
+    const boxAt = ([dx, dy, anchor]: readonly [number, number, 'start' | 'end']): Rect => {
+      const x0 = anchor === 'start' ? c[0] + dx : c[0] + dx - w;
+      return [x0 - 1, c[1] + dy - 6, x0 + w + 1, c[1] + dy + 2];
+    };
+    const place = POINT_LABEL_PLACES.find((p) => !reserved.some((r) => overlaps(r, boxAt(p)))) ?? POINT_LABEL_PLACES[0]!;
+    out.push(text(c[0] + place[0], c[1] + place[1], a.label, { size: 7, color: INK.accent, bold: true, anchor: place[2] }));
+    reserved.push([c[0] - 3.5, c[1] - 3.5, c[0] + 3.5, c[1] + 3.5], boxAt(place));
     return out.join('');
   }
   const half: Vec3 = [(a.widthDir[0] * a.width_m) / 2, (a.widthDir[1] * a.width_m) / 2, 0];
@@ -220,12 +245,38 @@ function attachmentSvg(f: Frame2D, view: ViewKind, a: SceneAttachment): string {
   return out.join('');
 }
 
-function memberLabel(f: Frame2D, m: SceneMember): string {
+/** Where an arm's name is printed, beyond its tip (memberLabel), as a rectangle. */
+function armLabelBox(f: Frame2D, m: SceneMember): Rect {
+  const a = f.at(m.root);
+  const b = f.at(m.tip);
+  const dx = b[0] - a[0];
+  const dy = b[1] - a[1];
+  const len = Math.hypot(dx, dy) || 1;
+  const w = measureText({ fontSize: 8, fontWeight: 'bold' }, m.label);
+  const x0 = b[0] + (dx / len) * 6;
+  const y = b[1] + (dy / len) * 6 + 3;
+  return dx >= 0 ? [x0 - 1.5, y - 8, x0 + w + 1.5, y + 3] : [x0 - w - 1.5, y - 8, x0 + 1.5, y + 3];
+}
+
+/** Heights up the pole (shares of its length) tried for its label, nearest the preferred first. */
+const POLE_LABEL_PLACES = [0.15, 0.08, 0.25, 0.35, 0.45, 0.55];
+
+function memberLabel(f: Frame2D, m: SceneMember, keepOff: readonly Rect[] = []): string {
   const a = f.at(m.root);
   const b = f.at(m.tip);
   if (m.kind === 'pole') {
     const r = (m.rootDiameter_m * f.scale) / 2;
-    // low on the pole, below the arms and the dimension rows hung under them
+    const w = measureText({ fontSize: 8, fontWeight: 'bold' }, m.label);
+    // Low on the pole, below the arms and the dimension rows hung under them; higher, or on the
+    // left, where an attachment on the pole has its mark or label there.
+    for (const t of POLE_LABEL_PLACES) {
+      const x = a[0] + (b[0] - a[0]) * t;
+      const y = a[1] + (b[1] - a[1]) * t;
+      const right: Rect = [x + r + 4, y - 7, x + r + 6 + w, y + 2];
+      if (!keepOff.some((k) => overlaps(k, right))) return text(x + r + 5, y, m.label, { size: 8, bold: true });
+      const left: Rect = [x - r - 6 - w, y - 7, x - r - 4, y + 2];
+      if (!keepOff.some((k) => overlaps(k, left))) return text(x - r - 5, y, m.label, { size: 8, bold: true, anchor: 'end' });
+    }
     return text(a[0] + (b[0] - a[0]) * 0.15 + r + 5, a[1] + (b[1] - a[1]) * 0.15, m.label, { size: 8, bold: true });
   }
   const dx = b[0] - a[0];
@@ -269,8 +320,10 @@ export function elevationDrawing(scene: Scene, opts: ElevationOptions): { svg: s
       body.push(line(p[0], p[1], q[0], q[1], { color: INK.member, width: 1.6 }));
     }
   }
-  for (const a of scene.attachments) body.push(attachmentSvg(f, view, a));
-  for (const m of scene.members) body.push(memberLabel(f, m));
+  // The arms' names first, then the attachments' labels clear of them, then the pole's name clear of both.
+  const reserved: Rect[] = scene.members.filter((m) => m.kind === 'arm').map((m) => armLabelBox(f, m));
+  for (const a of scene.attachments) body.push(attachmentSvg(f, view, a, reserved));
+  for (const m of scene.members) body.push(memberLabel(f, m, reserved));
   for (const d of opts.memberDims) body.push(memberDimsSvg(f, d));
   body.push(heightDimsSvg(f, box0, opts.heightDims));
   // view axes, bottom right
@@ -307,7 +360,8 @@ export function planDrawing(scene: Scene, opts: { readonly width?: number; reado
       body.push(line(p[0], p[1], q[0], q[1], { color: INK.member, width: 1.2 }));
     }
   }
-  for (const a of scene.attachments) body.push(attachmentSvg(f, view, a));
+  const reserved: Rect[] = scene.members.filter((m) => m.kind === 'arm').map((m) => armLabelBox(f, m));
+  for (const a of scene.attachments) body.push(attachmentSvg(f, view, a, reserved));
   for (const m of scene.members) if (m.kind === 'arm') body.push(memberLabel(f, m));
   const pole = scene.members.find((m) => m.kind === 'pole');
   if (pole) {
