@@ -46,7 +46,8 @@ export function memberAxesSketch(labels: AxesSketchLabels): { svg: string; width
   }
   body.push(line(...ob(base, -24, 0, 0), ...ob(base, 24, 0, 0), { width: 1 }));
   body.push(...triad(base, [{ v: [1, 0, 0], label: 'X' }, { v: [0, 1, 0], label: 'Y' }, { v: [0, 0, 1], label: 'Z' }], 38, INK.text));
-  body.push(text(base[0] - 26, base[1] + 12, 'origin: centre of the pole base', { size: 6.5, color: INK.muted }));
+  // Below the hatching and clear of the X label at the base.
+  body.push(text(base[0] - 26, base[1] + 19, 'origin: centre of the pole base', { size: 6.5, color: INK.muted }));
   // member axes drawn beside each member, tied to its axis by a dashed leader
   const poleAt = ob(base, 0, 0, 80);
   const poleMid = ob(base, 32, 0, 80);

@@ -204,8 +204,18 @@ const POINT_LABEL_PLACES: readonly (readonly [number, number, 'start' | 'end'])[
   [-5, -13, 'end'],
 ];
 
+/** The rectangle of a bold label centred on x with its baseline at y. */
+function middleLabelBox(x: number, y: number, label: string, size: number): Rect {
+  const w = measureText({ fontSize: size, fontWeight: 'bold' }, label);
+  return [x - w / 2 - 1, y - 0.8 * size, x + w / 2 + 1, y + 0.25 * size];
+}
+
+/** Panels first: their labels have fixed places, which the point attachments' labels then avoid. */
+const panelsFirst = (attachments: readonly SceneAttachment[]): SceneAttachment[] => [...attachments.filter((a) => a.kind === 'panel'), ...attachments.filter((a) => a.kind !== 'panel')];
+
 /** Draws an attachment. A point attachment's label takes the first of its places clear of
- * `reserved` (the arms' names, the labels placed before), and its mark and label are reserved. */
+ * `reserved` (the arms' names, the labels placed before), and its mark and label are reserved;
+ * a panel's label is reserved where it is. */
 function attachmentSvg(f: Frame2D, view: ViewKind, a: SceneAttachment, reserved: Rect[]): string {
   const c = f.at(a.centre);
   const h = f.at(a.anchor);
@@ -229,7 +239,9 @@ function attachmentSvg(f: Frame2D, view: ViewKind, a: SceneAttachment, reserved:
     const q = f.at([a.centre[0] - half[0], a.centre[1] - half[1], 0]);
     out.push(line(h[0], h[1], c[0], c[1], { color: INK.muted, width: 0.6 }));
     out.push(line(p[0], p[1], q[0], q[1], { color: INK.accent, width: 2.2 }));
-    out.push(text(c[0], c[1] + (c[1] >= h[1] ? 10 : -5), a.label, { size: 7, anchor: 'middle', color: INK.accent, bold: true }));
+    const y = c[1] + (c[1] >= h[1] ? 10 : -5);
+    out.push(text(c[0], y, a.label, { size: 7, anchor: 'middle', color: INK.accent, bold: true }));
+    reserved.push(middleLabelBox(c[0], y, a.label, 7));
     return out.join('');
   }
   const [u0] = viewCoords(view, [a.centre[0] - half[0], a.centre[1] - half[1], 0]);
@@ -241,7 +253,9 @@ function attachmentSvg(f: Frame2D, view: ViewKind, a: SceneAttachment, reserved:
   out.push(polygon([p, [p[0] + w, p[1]], [p[0] + w, q[1]], [p[0], q[1]]], 'none', { color: INK.accent, width: 1 }));
   // the label sits in the upper part of the panel, clear of the member axis it usually crosses
   const inside = q[1] - p[1] > 24;
-  out.push(text(p[0] + w / 2, inside ? p[1] + 11 : p[1] - 3, a.label, { size: 8, anchor: 'middle', color: INK.accent, bold: true }));
+  const y = inside ? p[1] + 11 : p[1] - 3;
+  out.push(text(p[0] + w / 2, y, a.label, { size: 8, anchor: 'middle', color: INK.accent, bold: true }));
+  reserved.push(middleLabelBox(p[0] + w / 2, y, a.label, 8));
   return out.join('');
 }
 
@@ -322,7 +336,7 @@ export function elevationDrawing(scene: Scene, opts: ElevationOptions): { svg: s
   }
   // The arms' names first, then the attachments' labels clear of them, then the pole's name clear of both.
   const reserved: Rect[] = scene.members.filter((m) => m.kind === 'arm').map((m) => armLabelBox(f, m));
-  for (const a of scene.attachments) body.push(attachmentSvg(f, view, a, reserved));
+  for (const a of panelsFirst(scene.attachments)) body.push(attachmentSvg(f, view, a, reserved));
   for (const m of scene.members) body.push(memberLabel(f, m, reserved));
   for (const d of opts.memberDims) body.push(memberDimsSvg(f, d));
   body.push(heightDimsSvg(f, box0, opts.heightDims));
@@ -361,7 +375,7 @@ export function planDrawing(scene: Scene, opts: { readonly width?: number; reado
     }
   }
   const reserved: Rect[] = scene.members.filter((m) => m.kind === 'arm').map((m) => armLabelBox(f, m));
-  for (const a of scene.attachments) body.push(attachmentSvg(f, view, a, reserved));
+  for (const a of panelsFirst(scene.attachments)) body.push(attachmentSvg(f, view, a, reserved));
   for (const m of scene.members) if (m.kind === 'arm') body.push(memberLabel(f, m));
   const pole = scene.members.find((m) => m.kind === 'pole');
   if (pole) {
