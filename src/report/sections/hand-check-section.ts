@@ -101,13 +101,13 @@ function otherSourcesText(check: MomentAreaCheck, d: Display): string {
   return `Other arms and offset weights on the pole add their in-plane moments (weight × horizontal lever arm projected on the plane) to the pole below them: ${list}. Their out-of-plane parts are left out.`;
 }
 
-export function handCheckSection(loaded: LoadedDesign, analysis: DesignAnalysis): DocSection {
+/** Null for a design without an arm: the method checks an arm and the pole in its plane, and the
+ * scope section says the hand check is not made (a section of one sentence would be a page). */
+export function handCheckSection(loaded: LoadedDesign, analysis: DesignAnalysis): DocSection | null {
   const { design } = loaded;
   const d = display(design.units);
   const check = momentAreaCheck(design);
-  if (!check) {
-    return { id: 'hand-check', title: HAND_CHECK_TITLE, blocks: [{ kind: 'paragraph', text: 'The design has no arm, so there is no in-plane arm case to check by hand.' }] };
-  }
+  if (!check) return null;
   const cmp = compareWithMatrix(check, analysis.model, analysis.cases);
   const arm = check.statics.arm;
   const blocks: Block[] = [

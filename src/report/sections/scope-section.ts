@@ -9,6 +9,7 @@ import type { CheckResults } from '../../checks/check-types.ts';
 import { CHECK_ORDER, CHECK_SCOPE, CHECK_TITLES, verdictByType } from '../../checks/verdict.ts';
 import type { CheckType } from '../../checks/check-types.ts';
 import { renderTemplate } from './templates.ts';
+import { HAND_CHECK_TITLE } from './hand-check-section.ts';
 
 export const SCOPE_TITLE = 'Scope and cautions';
 
@@ -60,5 +61,7 @@ function checksNotMade(loaded: LoadedDesign, checks: CheckResults | null): strin
     'base-plate': bolts === null ? noBolts : 'no base plate is given (criteria.basePlate)',
   };
   const absent = CHECK_ORDER.filter((t) => !made.has(t)).map((t) => `- ${CHECK_TITLES[t]}: not checked${why[t] ? ` (${why[t]})` : ''}.`);
-  return [renderTemplate('scope-not-checked', {}).trim(), ...absent].join('\n');
+  // The hand check works on an arm and the pole in its plane (src/report/sections/hand-check-section.ts).
+  const noHandCheck = loaded.design.arms.length === 0 ? [`- ${HAND_CHECK_TITLE}: not made (the design has no arm; the method checks an arm and the pole in the arm's plane).`] : [];
+  return [renderTemplate('scope-not-checked', {}).trim(), ...absent, ...noHandCheck].join('\n');
 }
