@@ -239,6 +239,14 @@ function attachmentSvg(f: Frame2D, view: ViewKind, a: SceneAttachment, reserved:
     const q = f.at([a.centre[0] - half[0], a.centre[1] - half[1], 0]);
     out.push(line(h[0], h[1], c[0], c[1], { color: INK.muted, width: 0.6 }));
     out.push(line(p[0], p[1], q[0], q[1], { color: INK.accent, width: 2.2 }));
+    if (Math.abs(q[1] - p[1]) > Math.abs(q[0] - p[0])) {
+      // A panel seen edge-on up the page (facing along X): its label beside the mark, not on it.
+      const x = Math.max(p[0], q[0]) + 4;
+      out.push(text(x, c[1] + 3, a.label, { size: 7, color: INK.accent, bold: true }));
+      const w = measureText({ fontSize: 7, fontWeight: 'bold' }, a.label);
+      reserved.push([x - 1, c[1] + 3 - 6, x + w + 1, c[1] + 3 + 2]);
+      return out.join('');
+    }
     const y = c[1] + (c[1] >= h[1] ? 10 : -5);
     out.push(text(c[0], y, a.label, { size: 7, anchor: 'middle', color: INK.accent, bold: true }));
     reserved.push(middleLabelBox(c[0], y, a.label, 7));
